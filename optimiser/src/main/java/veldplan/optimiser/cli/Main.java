@@ -1,0 +1,5 @@
+package veldplan.optimiser.cli;
+
+public final class Main {
+  public static void main(String[] args) {}
+}
