@@ -1,5 +1,50 @@
 package veldplan.optimiser.cli;
 
-public final class Main {
-  public static void main(String[] args) {}
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+
+/** The {@code veldplan} command line. */
+@Command(name = "veldplan", mixinStandardHelpOptions = true,
+    versionProvider = Main.Version.class,
+    description = "Simulates savanna parks under management policies and climate paths.",
+    subcommands = {SimulateCommand.class, CommandLine.HelpCommand.class})
+public final class Main implements Runnable {
+  @CommandLine.Spec
+  CommandLine.Model.CommandSpec spec;
+
+  /** Entry point. */
+  public static void main(String[] args) {
+    System.exit(execute(args));
+  }
+
+  /** Runs the command line and returns the exit code (for tests). */
+  public static int execute(String... args) {
+    CommandLine cli = new CommandLine(new Main());
+    cli.setParameterExceptionHandler((ex, a) -> {
+      ex.getCommandLine().getErr().println("error: " + ex.getMessage());
+      ex.getCommandLine().getErr().println("Run 'veldplan "
+          + ex.getCommandLine().getCommandName().replace("veldplan", "").trim()
+          + " --help' for the options.");
+      return ExitCodes.BAD_INPUT;
+    });
+    return cli.execute(args);
+  }
+
+  @Override
+  public void run() {
+    spec.commandLine().usage(spec.commandLine().getOut());
+  }
+
+  /** Tool version from the jar manifest. */
+  public static String version() {
+    String v = Main.class.getPackage().getImplementationVersion();
+    return v == null ? "dev" : v;
+  }
+
+  static final class Version implements CommandLine.IVersionProvider {
+    @Override
+    public String[] getVersion() {
+      return new String[] {"veldplan " + version()};
+    }
+  }
 }

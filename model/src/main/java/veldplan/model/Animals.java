@@ -1,0 +1,132 @@
+package veldplan.model;
+
+import org.apache.commons.numbers.gamma.InverseErfc;
+import veldplan.model.ecology.CarboneGittleman;
+import veldplan.shared.rng.CounterRandom;
+
+/**
+ * Predation, then the year's change in the numbers of herbivore guilds, elephants and predators.
+ *
+ * <h2>Herbivore guilds</h2>
+ * Ricker growth ln(N'/N) = r_m (1 - P / F) + sigma z, with r_m the maximum rate of increase
+ * (Caughley &amp; Krebs 1983 unless the scenario gives one), F the forage within reach and P the
+ * competition-weighted forage pressure ({@link Herbivory}): capacity is forage over intake per
+ * head. The food term is floored at -2 (at most 86 % lost to starvation in a year). Predation
+ * then removes the killed share.
+ *
+ * <h2>Predators</h2>
+ * Kills per predator follow a Holling type II response to prey biomass density; kills are shared
+ * among prey by Murdoch-type switching, share_i = (N_i m_i)^m / sum (N_j m_j)^m, so predators turn
+ * to whatever is abundant. Predator numbers follow Ricker growth towards the Carbone &amp;
+ * Gittleman (2002) capacity, 90 kg of a carnivore per 10,000 kg of its prey, at a maximum rate
+ * half that of a herbivore of the same mass (our calibration: carnivores breed more slowly, common
+ * practice, no source), so they grow more slowly than their prey.
+ *
+ * <h2>Elephants</h2>
+ * Births are breeding females x calving rate, reduced by contraception coverage x efficacy once
+ * the gestation lag has passed (Delsink et al. 2006); deaths are background mortality; food
+ * limits growth in the same Ricker form as the guilds, scaled so that growth stops when pressure
+ * equals forage without contraception.
+ *
+ * <h2>Random numbers</h2>
+ * One standard normal per herbivore (index h) and predator (index herbivores + p) and year from
+ * the demography stream, by inversion of one uniform, drawn whether used or not.
+ *
+ * <p>Fewer than one animal is none: abundance below 1 is set to 0.
+ */
+final class Animals {
+  /** Floor of the yearly log growth from food. */
+  static final double MIN_LOG_GROWTH = -2;
+  /** Largest share of a guild predators can take in a year. */
+  private static final double MAX_PREDATION = 0.95;
+
+  private Animals() {}
+
+  /** Standard normal deviate by inversion: Phi^-1(u) = -sqrt(2) erfc^-1(2u). */
+  static double standardNormal(long key, int year, int index) {
+    double u = CounterRandom.openUniform(key, year, index);
+    return -Math.sqrt(2) * InverseErfc.value(2 * u);
+  }
+
+  /** Predation hazard of each herbivore this year, from the abundances at the start of it. */
+  static void hunt(ModelParameters p, EcosystemState s) {
+    HerbivoreParameters hp = p.herbivores();
+    PredatorParameters pp = p.predators();
+    int herbivores = hp.count;
+    for (int h = 0; h < herbivores; h++) {
+      s.predationHazard[h] = 0;
+    }
+    double parkKm2 = p.blocks().totalAreaKm2();
+    for (int q = 0; q < pp.count; q++) {
+      int row = q * herbivores;
+      double biomass = 0;
+      double denominator = 0;
+      double m = pp.switchingExponent[q];
+      for (int h = 0; h < herbivores; h++) {
+        if (pp.hunts[row + h] > 0) {
+          double kg = s.abundance[h] * hp.bodyMassKg[h];
+          biomass += kg;
+          denominator += Math.pow(kg, m);
+        }
+      }
+      s.preyBiomassKg[q] = biomass;
+      if (biomass == 0 || s.predatorAbundance[q] == 0) {
+        continue;
+      }
+      double density = biomass / parkKm2;
+      double kills = s.predatorAbundance[q] * pp.killKgPerYear[q]
+          * density / (density + pp.halfSaturationKgPerKm2[q]);
+      for (int h = 0; h < herbivores; h++) {
+        if (pp.hunts[row + h] > 0 && s.abundance[h] > 0) {
+          double kg = s.abundance[h] * hp.bodyMassKg[h];
+          s.predationHazard[h] += kills * Math.pow(kg, m) / denominator / kg;
+        }
+      }
+    }
+  }
+
+  /** Updates guilds, elephants and predators for the year. */
+  static void breedAndDie(ModelParameters p, Forcing f, int year, EcosystemState s) {
+    HerbivoreParameters hp = p.herbivores();
+    PredatorParameters pp = p.predators();
+    ElephantParameters ep = p.elephants();
+    int herbivores = hp.count;
+    int e = hp.elephant;
+    long key = f.demographyKey;
+    for (int h = 0; h < herbivores; h++) {
+      double noise = hp.noiseSd[h] * standardNormal(key, year, h);
+      double n = s.abundance[h];
+      if (n == 0) {
+        continue;
+      }
+      double food = s.forageKg[h] > 0 ? s.pressureKg[h] / s.forageKg[h] : Double.POSITIVE_INFINITY;
+      double logGrowth;
+      if (h == e) {
+        double births = ep.breedingFemaleFraction() * ep.calvesPerFemalePerYear();
+        double maxRate = Math.log(1 + births - ep.mortalityPerYear());
+        double coverage = year >= ep.gestationLagYears()
+            ? s.coverageHistory[(year - ep.gestationLagYears()) % s.lagSlots] : 0;
+        double rate = Math.log(Math.max(1e-9, 1 + births
+            * (1 - ep.contraceptionEfficacy() * coverage) - ep.mortalityPerYear()));
+        logGrowth = Math.max(MIN_LOG_GROWTH, rate - Math.max(0, maxRate) * food);
+      } else {
+        logGrowth = Math.max(MIN_LOG_GROWTH, hp.maxGrowthRatePerYear[h] * (1 - food));
+      }
+      n *= Math.exp(logGrowth + noise) * (1 - Math.min(MAX_PREDATION, s.predationHazard[h]));
+      s.abundance[h] = n < 1 ? 0 : n;
+    }
+    for (int q = 0; q < pp.count; q++) {
+      double noise = pp.noiseSd[q] * standardNormal(key, year, herbivores + q);
+      double n = s.predatorAbundance[q];
+      if (n == 0) {
+        continue;
+      }
+      double capacity = CarboneGittleman.carnivoreNumber(s.preyBiomassKg[q], pp.bodyMassKg[q]);
+      double logGrowth = capacity > 0
+          ? Math.max(MIN_LOG_GROWTH, pp.maxGrowthRatePerYear[q] * (1 - n / capacity))
+          : MIN_LOG_GROWTH;
+      n *= Math.exp(logGrowth + noise);
+      s.predatorAbundance[q] = n < 1 ? 0 : n;
+    }
+  }
+}

@@ -1,0 +1,170 @@
+package veldplan.model;
+
+/**
+ * Mutable state of one run. Confined to one thread; reset, never reallocated, between runs.
+ * Indexing: [block], [block * TreeClass.COUNT + k], [herbivore] (elephants last),
+ * [herbivore * blocks + block], [predator]. Units in the field comments.
+ *
+ * <p>Besides the state carried from year to year (trees, animals, fuel carried over), it holds
+ * this year's flows and scratch arrays, so that the yearly loop allocates nothing.
+ */
+public final class EcosystemState {
+  final int blocks;
+  final int herbivores;
+  final int predators;
+  final int lagSlots;
+
+  int year;
+
+  // ---- carried from year to year
+  /** Trees per ha [block * K + k]. */
+  final double[] treesPerHa;
+  /** Unburnt, uneaten grass left at the end of the year (kg DM/ha) [block]. */
+  final double[] leftoverGrassKgPerHa;
+  /** Animals [herbivore], elephants last (head). */
+  final double[] abundance;
+  /** Predators [predator] (head). */
+  final double[] predatorAbundance;
+  /** Contraception coverage applied in past years, a ring buffer of lag + 1 years. */
+  final double[] coverageHistory;
+  /** Water points open last year [block]. */
+  final int[] waterPointsOpen;
+
+  // ---- this year's flows
+  final double[] basalAreaM2PerHa;
+  final double[] grassProductionKgPerHa;
+  final double[] fuelKgPerHa;
+  final double[] browseKgPerHa;
+  final double[] browseAllKgPerHa;
+  final double[] browsePressure;
+  final double[] plannedBurntFraction;
+  final double[] plannedIntensityKwPerM;
+  final double[] wildBurntFraction;
+  final double[] wildIntensityKwPerM;
+  final double[] elephantsPerKm2;
+  /** Share of each block within reach of water for each herbivore [herbivore * blocks + block]. */
+  final double[] reach;
+  final double[] grassDiet;
+  final double[] forageKg;
+  final double[] pressureKg;
+  final double[] predationHazard;
+  /** Biomass of the prey each predator hunts (kg) [predator]. */
+  final double[] preyBiomassKg;
+  double costBurning;
+  double costOfftake;
+  double costContraception;
+  double costWater;
+  double elephantsRemoved;
+  double femalesTreated;
+
+  // ---- scratch
+  /** Resource shares p[herbivore * categories + category], categories = blocks * 2. */
+  final double[] resourceShare;
+  final double[] nextClasses = new double[TreeClass.COUNT];
+
+  /** Allocates every array once for parameters {@code p}. */
+  public EcosystemState(ModelParameters p) {
+    blocks = p.blocks().count;
+    herbivores = p.herbivores().count;
+    predators = p.predators().count;
+    lagSlots = p.elephants().gestationLagYears() + 1;
+    treesPerHa = new double[blocks * TreeClass.COUNT];
+    leftoverGrassKgPerHa = new double[blocks];
+    abundance = new double[herbivores];
+    predatorAbundance = new double[predators];
+    coverageHistory = new double[lagSlots];
+    waterPointsOpen = new int[blocks];
+    basalAreaM2PerHa = new double[blocks];
+    grassProductionKgPerHa = new double[blocks];
+    fuelKgPerHa = new double[blocks];
+    browseKgPerHa = new double[blocks];
+    browseAllKgPerHa = new double[blocks];
+    browsePressure = new double[blocks];
+    plannedBurntFraction = new double[blocks];
+    plannedIntensityKwPerM = new double[blocks];
+    wildBurntFraction = new double[blocks];
+    wildIntensityKwPerM = new double[blocks];
+    elephantsPerKm2 = new double[blocks];
+    reach = new double[herbivores * blocks];
+    grassDiet = new double[herbivores];
+    forageKg = new double[herbivores];
+    pressureKg = new double[herbivores];
+    predationHazard = new double[herbivores];
+    preyBiomassKg = new double[predators];
+    resourceShare = new double[herbivores * blocks * 2];
+  }
+
+  /** Sets the state to the scenario's initial conditions. */
+  public void reset(ModelParameters p) {
+    year = 0;
+    BlockParameters bp = p.blocks();
+    System.arraycopy(bp.initialTreesPerHa, 0, treesPerHa, 0, treesPerHa.length);
+    System.arraycopy(bp.initialGrassKgPerHa, 0, leftoverGrassKgPerHa, 0, blocks);
+    System.arraycopy(p.herbivores().initialAbundance, 0, abundance, 0, herbivores);
+    System.arraycopy(p.predators().initialAbundance, 0, predatorAbundance, 0, predators);
+    System.arraycopy(bp.artificialWaterPoints, 0, waterPointsOpen, 0, blocks);
+    java.util.Arrays.fill(coverageHistory, 0);
+  }
+
+  /** Trees per ha of class {@code k} in {@code block}. */
+  public double treesPerHa(int block, int k) {
+    return treesPerHa[block * TreeClass.COUNT + k];
+  }
+
+  /** Abundance of herbivore {@code h} (head), elephants last. */
+  public double abundance(int h) {
+    return abundance[h];
+  }
+
+  /** Abundance of predator {@code p} (head). */
+  public double predatorAbundance(int p) {
+    return predatorAbundance[p];
+  }
+
+  /** Share of {@code block} within reach of water for herbivore {@code h}. */
+  public double reach(int h, int block) {
+    return reach[h * blocks + block];
+  }
+
+  /**
+   * Checks the invariants every process must keep: all state finite and non-negative.
+   *
+   * @return null if they hold, else a description of the first violation
+   */
+  public String violation() {
+    String v = firstBad("treesPerHa", treesPerHa);
+    v = v != null ? v : firstBad("leftoverGrassKgPerHa", leftoverGrassKgPerHa);
+    v = v != null ? v : firstBad("abundance", abundance);
+    v = v != null ? v : firstBad("predatorAbundance", predatorAbundance);
+    v = v != null ? v : firstBad("fuelKgPerHa", fuelKgPerHa);
+    v = v != null ? v : firstBad("grassProductionKgPerHa", grassProductionKgPerHa);
+    v = v != null ? v : firstBad("plannedBurntFraction", plannedBurntFraction);
+    v = v != null ? v : firstBad("wildBurntFraction", wildBurntFraction);
+    v = v != null ? v : firstBad("reach", reach);
+    if (v == null) {
+      double cost = costBurning + costOfftake + costContraception + costWater;
+      if (!(cost >= 0) || Double.isInfinite(cost)) {
+        v = "cost = " + cost;
+      }
+    }
+    if (v == null) {
+      for (int b = 0; b < blocks; b++) {
+        double burnt = plannedBurntFraction[b] + wildBurntFraction[b];
+        if (burnt > 1 + 1e-12) {
+          return "burnt fraction in block " + b + " = " + burnt;
+        }
+      }
+    }
+    return v;
+  }
+
+  private static String firstBad(String name, double[] values) {
+    for (int i = 0; i < values.length; i++) {
+      double x = values[i];
+      if (!(x >= 0) || Double.isInfinite(x)) {
+        return name + "[" + i + "] = " + x;
+      }
+    }
+    return null;
+  }
+}

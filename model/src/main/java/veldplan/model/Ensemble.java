@@ -1,0 +1,82 @@
+package veldplan.model;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
+
+/**
+ * Runs one policy on every (climate path, replicate) of a {@link Study}, in parallel over
+ * threads. The result does not depend on the thread count: each run depends only on its own
+ * forcing and the plan, and its trajectory goes to its own slot.
+ */
+public final class Ensemble {
+  private Ensemble() {}
+
+  /** Called after each finished run; must be thread-safe. */
+  @FunctionalInterface
+  public interface Progress {
+    /** One more run finished. */
+    void runFinished();
+  }
+
+  /**
+   * Runs the plan on every path and replicate.
+   *
+   * @param study    the study
+   * @param plan     the policy
+   * @param threads  worker threads, &gt;= 1
+   * @param progress called after each run
+   * @return trajectories indexed [path][replicate]
+   */
+  public static Trajectory[][] run(Study study, ManagementPlan plan, int threads,
+      Progress progress) {
+    if (threads < 1) {
+      throw new IllegalArgumentException("threads must be >= 1: " + threads);
+    }
+    int paths = study.paths().size();
+    int replicates = study.replicates();
+    ModelParameters p = study.parameters();
+    Simulator simulator = new Simulator(p);
+    Trajectory[][] out = new Trajectory[paths][replicates];
+    ExecutorService pool = Executors.newFixedThreadPool(threads, r -> {
+      Thread t = new Thread(r, "veldplan-run");
+      t.setDaemon(true);
+      return t;
+    });
+    try {
+      List<Future<?>> tasks = new ArrayList<>();
+      for (int worker = 0; worker < threads; worker++) {
+        final int first = worker;
+        tasks.add(pool.submit(() -> {
+          EcosystemState state = new EcosystemState(p);
+          for (int job = first; job < paths * replicates; job += threads) {
+            int path = job / replicates;
+            int replicate = job % replicates;
+            Trajectory trajectory = new Trajectory(p);
+            simulator.run(plan, study.forcing(path, replicate), state, trajectory);
+            out[path][replicate] = trajectory;
+            progress.runFinished();
+          }
+        }));
+      }
+      for (Future<?> task : tasks) {
+        task.get();
+      }
+    } catch (InterruptedException e) {
+      Thread.currentThread().interrupt();
+      throw new IllegalStateException("interrupted", e);
+    } catch (ExecutionException e) {
+      Throwable cause = e.getCause();
+      if (cause instanceof RuntimeException) {
+        throw (RuntimeException) cause;
+      }
+      throw new IllegalStateException(cause);
+    } finally {
+      pool.shutdownNow();
+    }
+    return out;
+  }
+}

@@ -1,0 +1,115 @@
+package veldplan.model;
+
+/**
+ * Everything about one replicate of one climate path that does not depend on the management
+ * policy, computed once and shared read-only by every policy evaluated on it (common random
+ * numbers). Arrays are indexed [year * blocks + block].
+ *
+ * <p>The soil water balance does not depend on the vegetation in this model (the trees and grass
+ * divide the transpired water between them; they do not change how much is transpired), so the
+ * whole monthly water balance is done here and the yearly loop only reads its results.
+ */
+public final class Forcing {
+  final int years;
+  final int blocks;
+  final long fireKey;
+  final long demographyKey;
+  final double[] rainfallMm;
+  final double[] petMm;
+  final double[] openWaterEvaporationMm;
+  final double[] aetMm;
+  final double[] growingDays;
+  final double[] grassPotentialKgPerHa;
+  final double[] treeGrowthIndex;
+  final double[] fireOffsetEarlyKwPerM;
+  final double[] fireOffsetLateKwPerM;
+  final double[] co2Ppm;
+
+  Forcing(int years, int blocks, long fireKey, long demographyKey, double[] co2Ppm) {
+    this.years = years;
+    this.blocks = blocks;
+    this.fireKey = fireKey;
+    this.demographyKey = demographyKey;
+    int n = years * blocks;
+    this.rainfallMm = new double[n];
+    this.petMm = new double[n];
+    this.openWaterEvaporationMm = new double[n];
+    this.aetMm = new double[n];
+    this.growingDays = new double[n];
+    this.grassPotentialKgPerHa = new double[n];
+    this.treeGrowthIndex = new double[n];
+    this.fireOffsetEarlyKwPerM = new double[n];
+    this.fireOffsetLateKwPerM = new double[n];
+    this.co2Ppm = co2Ppm.clone();
+  }
+
+  /** Number of years. */
+  public int years() {
+    return years;
+  }
+
+  /** Number of blocks. */
+  public int blocks() {
+    return blocks;
+  }
+
+  /** Key of the fire stream. */
+  public long fireKey() {
+    return fireKey;
+  }
+
+  /** Key of the demography stream. */
+  public long demographyKey() {
+    return demographyKey;
+  }
+
+  /** Block rainfall in the year (mm). */
+  public double rainfallMm(int year, int block) {
+    return rainfallMm[year * blocks + block];
+  }
+
+  /** Potential evapotranspiration of well-watered vegetation, Linacre (1977) (mm/yr). */
+  public double petMm(int year, int block) {
+    return petMm[year * blocks + block];
+  }
+
+  /** Open-water evaporation, Linacre (1977) (mm/yr). */
+  public double openWaterEvaporationMm(int year, int block) {
+    return openWaterEvaporationMm[year * blocks + block];
+  }
+
+  /** Actual evapotranspiration, surface evaporation plus transpiration (mm/yr). */
+  public double aetMm(int year, int block) {
+    return aetMm[year * blocks + block];
+  }
+
+  /** Length of growing period (days/yr). */
+  public double growingDays(int year, int block) {
+    return growingDays[year * blocks + block];
+  }
+
+  /** Grass production with no trees and no grazing (kg DM/ha/yr). */
+  public double grassPotentialKgPerHa(int year, int block) {
+    return grassPotentialKgPerHa[year * blocks + block];
+  }
+
+  /** Tree growth index (1 = the calibration's reference conditions). */
+  public double treeGrowthIndex(int year, int block) {
+    return treeGrowthIndex[year * blocks + block];
+  }
+
+  /** Trollope fire intensity without the fuel term, early dry season (kW/m). */
+  public double fireOffsetEarlyKwPerM(int year, int block) {
+    return fireOffsetEarlyKwPerM[year * blocks + block];
+  }
+
+  /** Trollope fire intensity without the fuel term, late dry season (kW/m). */
+  public double fireOffsetLateKwPerM(int year, int block) {
+    return fireOffsetLateKwPerM[year * blocks + block];
+  }
+
+  /** CO2 in the year (ppm). */
+  public double co2Ppm(int year) {
+    return co2Ppm[year];
+  }
+}

@@ -1,0 +1,230 @@
+package veldplan.model;
+
+import veldplan.model.climate.BaselineClimate;
+import veldplan.model.climate.Weather;
+import veldplan.model.ecology.Co2Response;
+import veldplan.model.ecology.GrowingPeriod;
+import veldplan.model.ecology.Linacre;
+import veldplan.model.ecology.ThornthwaiteMather;
+import veldplan.model.ecology.YanHunt;
+
+/**
+ * Computes a replicate's {@link Forcing}: the monthly water balance of every block and what the
+ * yearly loop needs from it.
+ *
+ * <h2>Water balance, month by month</h2>
+ * <ol>
+ *   <li>Potential evapotranspiration of well-watered vegetation from temperatures, altitude and
+ *       latitude: Linacre (1977), with his dew-point regression (clamped at T - Td &gt;= 4 °C as
+ *       he advises). Open-water evaporation (his lake formula) is reported alongside.</li>
+ *   <li>Surface evaporation: rain wets the top 0.10 m of soil, and what that layer holds
+ *       evaporates before roots can use it: up to twice the total evaporable water per month,
+ *       TEW = 1000 (θFC - 0.5 θWP) Ze (FAO-56 Eq. 73, Allen et al. 1998) with θ from Saxton &amp;
+ *       Rawls (2006). Fine soils hold more near the surface and lose more: this, with deep
+ *       drainage from the small bucket of sands, gives the inverse-texture effect (Noy-Meir 1973;
+ *       Sala et al. 1988) without hard-coding it.</li>
+ *   <li>The rest enters a Thornthwaite–Mather (1955) bucket of capacity AW x rooting depth;
+ *       transpiration is its actual evapotranspiration.</li>
+ *   <li>Growing days: FAO (1978) length of growing period from monthly rainfall and PET, with the
+ *       stored-water reserve capped at 100 mm.</li>
+ * </ol>
+ *
+ * <h2>Production potentials</h2>
+ * Grass: transpiration x water-use efficiency x the C4 temperature response (Yan &amp; Hunt 1999)
+ * of each month's mean temperature, summed over months, times the C4 CO2 factor. Trees: the same
+ * with the C3 response, divided by the reference transpiration, as a growth index.
+ *
+ * <h2>Fire weather</h2>
+ * For the early- and late-dry-season burning months, relative humidity at the afternoon maximum
+ * temperature from Linacre's dew point and the FAO-56 saturation vapour pressure (Eq. 11), and
+ * fuel moisture drying from the green value to the cured value with months since the growing
+ * season ended; these give all terms of the Trollope regression except fuel load.
+ */
+public final class ForcingBuilder {
+  private static final int[] DAYS = {31, 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31};
+  /** FAO (1978): at most 100 mm of stored water extends the growing period. */
+  private static final double LGP_RESERVE_CAP_MM = 100;
+  /** Share of the bucket filled at the start of the first year (our choice; a spin-up). */
+  private static final double INITIAL_BUCKET_FILL = 0.5;
+
+  private ForcingBuilder() {}
+
+  /**
+   * The dry-season months in which early and late planned burns are lit, from the baseline
+   * climatology: the first and the last month of the longest run of months in which mean
+   * rainfall is below half of PET (FAO 1978's start/end criterion).
+   *
+   * @return {early month0, late month0, months since growing season ended at early, at late}
+   */
+  public static int[] fireSeasonMonths(BaselineClimate baseline, double altitudeM,
+      double latitudeDeg) {
+    boolean[] dry = new boolean[12];
+    double hottest = -1e9;
+    double coldest = 1e9;
+    for (int m = 0; m < 12; m++) {
+      double t = baseline.meanMonthlyTemperatureC(m);
+      hottest = Math.max(hottest, t);
+      coldest = Math.min(coldest, t);
+    }
+    for (int m = 0; m < 12; m++) {
+      double tmax = baseline.meanMonthlyTmaxC(m);
+      double tmin = baseline.meanMonthlyTminC(m);
+      double pet = monthlyPet(0.5 * (tmax + tmin), tmax - tmin, hottest - coldest, altitudeM,
+          latitudeDeg, m);
+      dry[m] = baseline.meanMonthlyRainfallMm(m) < 0.5 * pet;
+    }
+    int bestStart = -1;
+    int bestLength = 0;
+    for (int start = 0; start < 12; start++) {
+      if (!dry[start] || dry[(start + 11) % 12]) {
+        continue;
+      }
+      int length = 0;
+      while (length < 12 && dry[(start + length) % 12]) {
+        length++;
+      }
+      if (length > bestLength) {
+        bestLength = length;
+        bestStart = start;
+      }
+    }
+    if (bestStart < 0) {
+      // All months dry, or none: burn in the driest months with fuel as cured as it gets.
+      int driest = 0;
+      for (int m = 1; m < 12; m++) {
+        if (baseline.meanMonthlyRainfallMm(m) < baseline.meanMonthlyRainfallMm(driest)) {
+          driest = m;
+        }
+      }
+      boolean allDry = dry[0];
+      return new int[] {driest, driest, allDry ? 12 : 1, allDry ? 12 : 1};
+    }
+    int late = (bestStart + bestLength - 1) % 12;
+    return new int[] {bestStart, late, 1, bestLength};
+  }
+
+  static double monthlyPet(double meanTempC, double dailyRangeC, double annualRangeC,
+      double altitudeM, double latitudeDeg, int month0) {
+    double depression =
+        Linacre.clampedDewPointDepressionC(altitudeM, meanTempC, dailyRangeC, annualRangeC);
+    return DAYS[month0] * Linacre.wellWateredEvapotranspirationMmPerDay(meanTempC, altitudeM,
+        latitudeDeg, depression);
+  }
+
+  /** Saturation vapour pressure (kPa), FAO-56 Eq. 11 (Tetens form). */
+  static double saturationVapourPressureKPa(double tempC) {
+    return 0.6108 * Math.exp(17.27 * tempC / (tempC + 237.3));
+  }
+
+  /**
+   * Builds the forcing of one replicate.
+   *
+   * @param p             model parameters
+   * @param weather       the replicate's park weather
+   * @param fireSeasons   from {@link #fireSeasonMonths}
+   * @param fireKey       fire stream key
+   * @param demographyKey demography stream key
+   */
+  public static Forcing build(ModelParameters p, Weather weather, int[] fireSeasons,
+      long fireKey, long demographyKey) {
+    BlockParameters bp = p.blocks();
+    GrassParameters g = p.grass();
+    TreeParameters t = p.trees();
+    FireParameters f = p.fire();
+    int years = p.years();
+    int blocks = bp.count;
+    double[] co2 = new double[years];
+    for (int y = 0; y < years; y++) {
+      co2[y] = weather.co2Ppm(y);
+    }
+    Forcing out = new Forcing(years, blocks, fireKey, demographyKey, co2);
+    double[] rain = new double[12];
+    double[] pet = new double[12];
+    double[] meanT = new double[12];
+    double[] range = new double[12];
+    double moistureEarly = f.curedFuelMoisturePercent() + (f.greenFuelMoisturePercent()
+        - f.curedFuelMoisturePercent()) * Math.exp(-fireSeasons[2] / f.curingMonths());
+    double moistureLate = f.curedFuelMoisturePercent() + (f.greenFuelMoisturePercent()
+        - f.curedFuelMoisturePercent()) * Math.exp(-fireSeasons[3] / f.curingMonths());
+    double windTerm = 596 / Math.max(0.5, f.windSpeedMPerS());
+    for (int b = 0; b < blocks; b++) {
+      double capacity = bp.bucketCapacityMm[b];
+      double storage = INITIAL_BUCKET_FILL * capacity;
+      for (int y = 0; y < years; y++) {
+        double hottest = -1e9;
+        double coldest = 1e9;
+        for (int m = 0; m < 12; m++) {
+          meanT[m] = 0.5 * (weather.tminC(y, m) + weather.tmaxC(y, m));
+          range[m] = weather.tmaxC(y, m) - weather.tminC(y, m);
+          hottest = Math.max(hottest, meanT[m]);
+          coldest = Math.min(coldest, meanT[m]);
+          rain[m] = weather.rainfallMm(y, m) * bp.rainfallMultiplier[b];
+        }
+        double annualRange = hottest - coldest;
+        double aet = 0;
+        double petSum = 0;
+        double e0Sum = 0;
+        double grassWater = 0;
+        double treeWater = 0;
+        double rainSum = 0;
+        for (int m = 0; m < 12; m++) {
+          double depression = Linacre.clampedDewPointDepressionC(bp.altitudeM[b], meanT[m],
+              range[m], annualRange);
+          pet[m] = DAYS[m] * Linacre.wellWateredEvapotranspirationMmPerDay(meanT[m],
+              bp.altitudeM[b], bp.latitudeDeg[b], depression);
+          e0Sum += DAYS[m] * Linacre.openWaterEvaporationMmPerDay(meanT[m], bp.altitudeM[b],
+              bp.latitudeDeg[b], depression);
+          double surface = Math.min(rain[m], Math.min(bp.surfaceEvaporationCapMm[b], pet[m]));
+          double infiltrated = rain[m] - surface;
+          double demand = pet[m] - surface;
+          double after = ThornthwaiteMather.storageAfterMonth(capacity, storage, infiltrated,
+              demand);
+          double transpiration = ThornthwaiteMather.actualEvapotranspirationMm(storage, after,
+              infiltrated, demand);
+          storage = after;
+          aet += surface + transpiration;
+          petSum += pet[m];
+          rainSum += rain[m];
+          grassWater += transpiration
+              * YanHunt.relativeRate(meanT[m], g.c4TminC(), g.c4ToptC(), g.c4TmaxC());
+          treeWater += transpiration
+              * YanHunt.relativeRate(meanT[m], t.c3TminC, t.c3ToptC, t.c3TmaxC);
+        }
+        double c3 = Co2Response.michaelisMenten(co2[y], t.co2ReferencePpm,
+            t.co2HalfSaturationPpm);
+        double c4 = 1 + g.c4Co2Share() * (c3 - 1);
+        int at = y * blocks + b;
+        out.rainfallMm[at] = rainSum;
+        out.petMm[at] = petSum;
+        out.openWaterEvaporationMm[at] = e0Sum;
+        out.aetMm[at] = aet;
+        out.growingDays[at] = GrowingPeriod.lengthOfGrowingPeriodDays(rain, pet,
+            LGP_RESERVE_CAP_MM);
+        out.grassPotentialKgPerHa[at] = grassWater * g.waterUseEfficiencyKgPerHaPerMm() * c4;
+        out.treeGrowthIndex[at] = treeWater * c3 / t.referenceAetMm;
+        out.fireOffsetEarlyKwPerM[at] = fireOffset(weather, y, fireSeasons[0], bp.altitudeM[b],
+            annualRange, moistureEarly, windTerm);
+        out.fireOffsetLateKwPerM[at] = fireOffset(weather, y, fireSeasons[1], bp.altitudeM[b],
+            annualRange, moistureLate, windTerm);
+      }
+    }
+    return out;
+  }
+
+  /**
+   * Trollope's fire-intensity regression without its fuel term (kW/m):
+   * 2729 - 530 sqrt(FM) - 0.1907 RH^2 - 596 / W (methods sheet §8.2).
+   */
+  private static double fireOffset(Weather weather, int year, int month0, double altitudeM,
+      double annualRangeC, double fuelMoisturePercent, double windTerm) {
+    double tmax = weather.tmaxC(year, month0);
+    double tmin = weather.tminC(year, month0);
+    double mean = 0.5 * (tmax + tmin);
+    double depression =
+        Linacre.clampedDewPointDepressionC(altitudeM, mean, tmax - tmin, annualRangeC);
+    double dewPoint = mean - depression;
+    double rh = 100 * Math.min(1, saturationVapourPressureKPa(dewPoint)
+        / saturationVapourPressureKPa(tmax));
+    return 2729 - 530 * Math.sqrt(fuelMoisturePercent) - 0.1907 * rh * rh - windTerm;
+  }
+}

@@ -1,0 +1,39 @@
+package veldplan.model;
+
+/**
+ * Grass sub-model parameters.
+ *
+ * @param waterUseEfficiencyKgPerHaPerMm grass dry matter per mm of actual evapotranspiration at
+ *     optimal temperature and reference CO2, no trees (kg DM/ha/mm). Our calibration: with the
+ *     soil bucket it gives rain-use efficiencies of about 3–6 kg/ha/mm at 400–700 mm, the range Le
+ *     Houérou (1984) gives for semi-arid rangeland in good condition (from memory).
+ * @param treeSuppressionHaPerM2 k in G = G0 exp(-k X), X tree basal area (m2/ha): the negative
+ *     exponential form of Smit (2005). 0.1 halves grass at 6.9 m2/ha (our calibration).
+ * @param carryOverFraction share of last year's unburnt, uneaten grass still standing as fuel
+ *     (fraction); small, as Midgley et al. (2006) found carry-over unimportant for burnt area
+ * @param maxFuelKgPerHa ceiling on standing fuel (kg DM/ha)
+ * @param properUseFraction share of the year's production herbivores can eat (fraction)
+ * @param c4TminC base temperature of the C4 grass response, Yan &amp; Hunt (1999) form (°C)
+ * @param c4ToptC optimum temperature of C4 grass (°C)
+ * @param c4TmaxC ceiling temperature of C4 grass (°C)
+ * @param c4Co2Share C4 share of the C3 (tree) CO2 response above 1: f4 = 1 + s (f3 - 1)
+ */
+public record GrassParameters(
+    double waterUseEfficiencyKgPerHaPerMm,
+    double treeSuppressionHaPerM2,
+    double carryOverFraction,
+    double maxFuelKgPerHa,
+    double properUseFraction,
+    double c4TminC,
+    double c4ToptC,
+    double c4TmaxC,
+    double c4Co2Share) {
+
+  /**
+   * Default values. Cardinal temperatures: generic C4 tropical grass 8–12 / 30–35 / 42–45 °C
+   * (methods sheet §6, from memory); we take 10 / 32 / 44.
+   */
+  public static GrassParameters defaults() {
+    return new GrassParameters(7.0, 0.1, 0.15, 6000, 0.45, 10, 32, 44, 0.3);
+  }
+}

@@ -1,0 +1,74 @@
+package veldplan.model;
+
+/**
+ * Parameters of every herbivore that eats forage: the scenario's guilds first, then elephants as
+ * the last index ({@link #elephant}). Arrays are indexed by herbivore.
+ */
+public final class HerbivoreParameters {
+  /** Number of herbivores including elephants. */
+  final int count;
+  /** Index of the elephants (the last one). */
+  final int elephant;
+  final String[] names;
+  final double[] bodyMassKg;
+  /** Dry-matter intake per head per year (kg DM/yr), Kleiber scaling (methods sheet §9.2). */
+  final double[] intakeKgPerYear;
+  /** Share of grass in the diet; for elephants the share when browse is plentiful. */
+  final double[] grassDietFraction;
+  /** Dry-season foraging distance from water (km); +infinity = not water dependent. */
+  final double[] reachKm;
+  final double[] maxGrowthRatePerYear;
+  final double[] noiseSd;
+  final double[] initialAbundance;
+  final double[] quasiExtinctionAbundance;
+  /** Feeding role per guild (ordinal of GuildRole); -1 for elephants. */
+  final int[] role;
+
+  HerbivoreParameters(String[] names, double[] bodyMassKg, double[] intakeKgPerYear,
+      double[] grassDietFraction, double[] reachKm, double[] maxGrowthRatePerYear,
+      double[] noiseSd, double[] initialAbundance, double[] quasiExtinctionAbundance,
+      int[] role) {
+    this.count = names.length;
+    this.elephant = count - 1;
+    this.names = names.clone();
+    this.bodyMassKg = bodyMassKg.clone();
+    this.intakeKgPerYear = intakeKgPerYear.clone();
+    this.grassDietFraction = grassDietFraction.clone();
+    this.reachKm = reachKm.clone();
+    this.maxGrowthRatePerYear = maxGrowthRatePerYear.clone();
+    this.noiseSd = noiseSd.clone();
+    this.initialAbundance = initialAbundance.clone();
+    this.quasiExtinctionAbundance = quasiExtinctionAbundance.clone();
+    this.role = role.clone();
+  }
+
+  /** Number of herbivores including elephants. */
+  public int count() {
+    return count;
+  }
+
+  /** Index of the elephants. */
+  public int elephantIndex() {
+    return elephant;
+  }
+
+  /** Name of herbivore {@code h}. */
+  public String name(int h) {
+    return names[h];
+  }
+
+  /** Quasi-extinction threshold of herbivore {@code h} (head). */
+  public double quasiExtinctionAbundance(int h) {
+    return quasiExtinctionAbundance[h];
+  }
+
+  /** Body mass of herbivore {@code h} (kg). */
+  public double bodyMassKg(int h) {
+    return bodyMassKg[h];
+  }
+
+  /** Maximum rate of increase of herbivore {@code h} (1/yr). */
+  public double maxGrowthRatePerYear(int h) {
+    return maxGrowthRatePerYear[h];
+  }
+}

@@ -1,0 +1,285 @@
+package veldplan.model;
+
+import java.util.ArrayList;
+import java.util.List;
+import veldplan.model.climate.BaselineClimate;
+import veldplan.model.climate.ClimatePathModel;
+import veldplan.model.climate.Co2Pathways;
+import veldplan.model.ecology.MaximumGrowthRate;
+import veldplan.model.ecology.Metabolism;
+import veldplan.model.ecology.SaxtonRawls;
+import veldplan.model.ecology.SoilWaterCharacteristics;
+import veldplan.shared.scenario.BurnBlock;
+import veldplan.shared.scenario.ClimatePath;
+import veldplan.shared.scenario.ClimateTable;
+import veldplan.shared.scenario.DeltaChange;
+import veldplan.shared.scenario.Guild;
+import veldplan.shared.scenario.LoadedScenario;
+import veldplan.shared.scenario.Policy;
+import veldplan.shared.scenario.Predator;
+import veldplan.shared.scenario.Scenario;
+
+/**
+ * Turns a checked scenario into model parameters, climate paths and a {@link Study}: units,
+ * soil physics and allometry are worked out here, once, so the yearly loop only multiplies.
+ */
+public final class ParametersFromScenario {
+  /** Field metabolic rate as a multiple of Kleiber's basal rate: 2–3 (methods §9.2, from memory). */
+  static final double FIELD_METABOLIC_MULTIPLE = 2.5;
+  /** Metabolisable energy of savanna forage: 7–9 MJ/kg DM (methods §9.2, from memory). */
+  static final double FORAGE_ENERGY_MJ_PER_KG = 8.0;
+  /**
+   * Energy a carnivore gains per kg of live prey killed (kJ/kg): about 60 % of a carcass is eaten
+   * at roughly 8 MJ/kg (from memory; our assumption).
+   */
+  static final double PREY_ENERGY_KJ_PER_KG = 5000;
+  /** Prey biomass density at which kills are half their maximum (kg/km2); our calibration. */
+  static final double PREDATION_HALF_SATURATION_KG_PER_KM2 = 2000;
+  /** Predators' maximum rate of increase relative to a herbivore of the same mass. */
+  static final double PREDATOR_RATE_FACTOR = 0.5;
+  /** Prey switching exponent when the scenario gives none: m = 2 (methods §10.2, from memory). */
+  static final double DEFAULT_SWITCHING_EXPONENT = 2;
+  /** Depth of the soil surface layer that dries by evaporation, Ze (m): FAO-56, 0.10–0.15 m. */
+  static final double SURFACE_LAYER_M = 0.10;
+  /** Wetting and drying cycles of the surface layer per month (our calibration). */
+  static final double SURFACE_CYCLES_PER_MONTH = 2;
+  /** Elephants' preference of browse over grass (our calibration). */
+  static final double ELEPHANT_BROWSE_PREFERENCE = 3;
+  /** Years from the start of contraception to fewer births (gestation about 22 months). */
+  static final int GESTATION_LAG_YEARS = 2;
+
+  private ParametersFromScenario() {}
+
+  /** Model parameters for a scenario. */
+  public static ModelParameters parameters(Scenario sc) {
+    List<BurnBlock> blocks = sc.park().blocks();
+    int nb = blocks.size();
+    String[] names = new String[nb];
+    double[] area = new double[nb];
+    double[] bucket = new double[nb];
+    double[] surface = new double[nb];
+    double[] altitude = new double[nb];
+    double[] latitude = new double[nb];
+    double[] multiplier = new double[nb];
+    int[] points = new int[nb];
+    double[] river = new double[nb];
+    double[] grass = new double[nb];
+    double[] trees = new double[nb * TreeClass.COUNT];
+    for (int b = 0; b < nb; b++) {
+      BurnBlock block = blocks.get(b);
+      SoilWaterCharacteristics soil = SaxtonRawls.of(block.sandFraction(), block.clayFraction(),
+          block.organicMatterPercent());
+      names[b] = block.name();
+      area[b] = block.areaHa();
+      bucket[b] = 1000 * soil.availableWater() * block.rootingDepthM();
+      // FAO-56 Eq. 73: TEW = 1000 (thetaFC - 0.5 thetaWP) Ze.
+      double tew = 1000 * (soil.fieldCapacity() - 0.5 * soil.wiltingPoint()) * SURFACE_LAYER_M;
+      surface[b] = SURFACE_CYCLES_PER_MONTH * tew;
+      altitude[b] = block.altitudeM();
+      latitude[b] = block.latitudeDeg();
+      multiplier[b] = block.rainfallMultiplier();
+      points[b] = block.artificialWaterPoints();
+      river[b] = block.perennialRiverKm();
+      grass[b] = block.initialGrassKgPerHa();
+      System.arraycopy(block.initialTreesPerHa().toArray(), 0, trees, b * TreeClass.COUNT,
+          TreeClass.COUNT);
+    }
+    BlockParameters bp = new BlockParameters(names, area, bucket, surface, altitude, latitude,
+        multiplier, points, river, grass, trees);
+    return new ModelParameters(sc.startYear(), sc.horizonYears(), bp, herbivores(sc),
+        new ElephantParameters(sc.elephants().breedingFemaleFraction(),
+            sc.elephants().calvesPerFemalePerYear(), sc.elephants().mortalityPerYear(),
+            sc.elephants().contraceptionEfficacy(), GESTATION_LAG_YEARS,
+            ELEPHANT_BROWSE_PREFERENCE),
+        predators(sc), GrassParameters.defaults(), TreeParameters.defaults(),
+        FireParameters.defaults(), sc.costs());
+  }
+
+  private static HerbivoreParameters herbivores(Scenario sc) {
+    List<Guild> guilds = sc.guilds();
+    int n = guilds.size() + 1;
+    String[] names = new String[n];
+    double[] mass = new double[n];
+    double[] intake = new double[n];
+    double[] grassDiet = new double[n];
+    double[] reach = new double[n];
+    double[] rate = new double[n];
+    double[] noise = new double[n];
+    double[] initial = new double[n];
+    double[] threshold = new double[n];
+    int[] role = new int[n];
+    for (int h = 0; h < guilds.size(); h++) {
+      Guild g = guilds.get(h);
+      names[h] = g.name();
+      mass[h] = g.bodyMassKg();
+      grassDiet[h] = g.grassDietFraction();
+      reach[h] = g.maxDistanceFromWaterKm() == null ? Double.POSITIVE_INFINITY
+          : g.maxDistanceFromWaterKm();
+      rate[h] = g.maxGrowthRatePerYear() == null ? MaximumGrowthRate.caughleyKrebs(mass[h])
+          : g.maxGrowthRatePerYear();
+      noise[h] = g.environmentalNoiseSd();
+      initial[h] = g.initialAbundance();
+      threshold[h] = g.quasiExtinctionAbundance();
+      role[h] = g.role().ordinal();
+    }
+    int e = n - 1;
+    var el = sc.elephants();
+    names[e] = "elephants";
+    mass[e] = el.bodyMassKg();
+    grassDiet[e] = 0.5;
+    reach[e] = el.maxDistanceFromWaterKm();
+    rate[e] = Math.log(1 + el.breedingFemaleFraction() * el.calvesPerFemalePerYear()
+        - el.mortalityPerYear());
+    noise[e] = el.environmentalNoiseSd();
+    initial[e] = el.initialAbundance();
+    threshold[e] = el.quasiExtinctionAbundance();
+    role[e] = -1;
+    for (int h = 0; h < n; h++) {
+      intake[h] = 365 * Metabolism.dryMatterIntakeKgPerDay(mass[h], FIELD_METABOLIC_MULTIPLE,
+          FORAGE_ENERGY_MJ_PER_KG);
+    }
+    return new HerbivoreParameters(names, mass, intake, grassDiet, reach, rate, noise, initial,
+        threshold, role);
+  }
+
+  private static PredatorParameters predators(Scenario sc) {
+    List<Predator> list = sc.predators();
+    int n = list.size();
+    int herbivores = sc.guilds().size() + 1;
+    String[] names = new String[n];
+    double[] mass = new double[n];
+    double[] kill = new double[n];
+    double[] half = new double[n];
+    double[] rate = new double[n];
+    double[] switching = new double[n];
+    double[] noise = new double[n];
+    double[] initial = new double[n];
+    double[] threshold = new double[n];
+    double[] hunts = new double[n * herbivores];
+    List<String> guildNames = new ArrayList<>();
+    sc.guilds().forEach(g -> guildNames.add(g.name()));
+    for (int q = 0; q < n; q++) {
+      Predator pr = list.get(q);
+      names[q] = pr.name();
+      mass[q] = pr.bodyMassKg();
+      // Kleiber: basal 293 W^0.75 kJ/day times the field multiple, met by live prey.
+      kill[q] = 365 * FIELD_METABOLIC_MULTIPLE * 293 * Math.pow(mass[q], 0.75)
+          / PREY_ENERGY_KJ_PER_KG;
+      half[q] = PREDATION_HALF_SATURATION_KG_PER_KM2;
+      rate[q] = PREDATOR_RATE_FACTOR * MaximumGrowthRate.caughleyKrebs(mass[q]);
+      switching[q] = pr.switchingExponent() == null ? DEFAULT_SWITCHING_EXPONENT
+          : pr.switchingExponent();
+      noise[q] = pr.environmentalNoiseSd();
+      initial[q] = pr.initialAbundance();
+      threshold[q] = pr.quasiExtinctionAbundance();
+      for (String prey : pr.preyGuilds()) {
+        int h = guildNames.indexOf(prey);
+        if (h < 0) {
+          throw new IllegalArgumentException("predator " + pr.name() + " hunts unknown guild "
+              + prey);
+        }
+        hunts[q * herbivores + h] = 1;
+      }
+    }
+    return new PredatorParameters(names, mass, kill, half, rate, switching, noise, initial,
+        threshold, hunts);
+  }
+
+  /** The baseline climate of a loaded scenario. */
+  public static BaselineClimate baseline(ClimateTable table) {
+    int months = table.years() * 12;
+    double[] rain = new double[months];
+    double[] tmin = new double[months];
+    double[] tmax = new double[months];
+    for (int y = 0; y < table.years(); y++) {
+      for (int m = 0; m < 12; m++) {
+        rain[y * 12 + m] = table.rainfallMm(y, m);
+        tmin[y * 12 + m] = table.tminC(y, m);
+        tmax[y * 12 + m] = table.tmaxC(y, m);
+      }
+    }
+    return new BaselineClimate(table.firstYear(), rain, tmin, tmax);
+  }
+
+  /** The climate paths of a loaded scenario, each over the horizon. */
+  public static List<ClimatePathModel> paths(LoadedScenario loaded) {
+    Scenario sc = loaded.scenario();
+    Co2Pathways co2 = Co2Pathways.load();
+    int years = sc.horizonYears();
+    List<ClimatePathModel> out = new ArrayList<>();
+    for (ClimatePath path : sc.climate().paths()) {
+      double[] ppm = new double[years];
+      for (int y = 0; y < years; y++) {
+        ppm[y] = co2.ppm(path.co2Pathway(), sc.startYear() + y);
+      }
+      if (path.monthlySeriesCsv() != null) {
+        ClimateTable table = loaded.pathSeries().get(path.name());
+        int first = sc.startYear() - table.firstYear();
+        double[] rain = new double[years * 12];
+        double[] tmin = new double[years * 12];
+        double[] tmax = new double[years * 12];
+        for (int y = 0; y < years; y++) {
+          for (int m = 0; m < 12; m++) {
+            rain[y * 12 + m] = table.rainfallMm(first + y, m);
+            tmin[y * 12 + m] = table.tminC(first + y, m);
+            tmax[y * 12 + m] = table.tmaxC(first + y, m);
+          }
+        }
+        out.add(ClimatePathModel.explicit(path.name(), rain, tmin, tmax, ppm));
+      } else {
+        double[] factor = new double[years];
+        double[] shift = new double[years];
+        for (int y = 0; y < years; y++) {
+          int year = sc.startYear() + y;
+          factor[y] = 1 + interpolate(path.deltaChange(), year, true) / 100;
+          shift[y] = interpolate(path.deltaChange(), year, false);
+        }
+        out.add(ClimatePathModel.deltaChange(path.name(), factor, shift, ppm));
+      }
+    }
+    return out;
+  }
+
+  /** Linear interpolation between anchors, constant outside them. */
+  static double interpolate(List<DeltaChange> anchors, int year, boolean rainfall) {
+    DeltaChange first = anchors.get(0);
+    if (year <= first.year()) {
+      return rainfall ? first.rainfallChangePercent() : first.temperatureChangeC();
+    }
+    for (int i = 1; i < anchors.size(); i++) {
+      DeltaChange a = anchors.get(i - 1);
+      DeltaChange b = anchors.get(i);
+      if (year <= b.year()) {
+        double w = (year - a.year()) / (double) (b.year() - a.year());
+        return rainfall
+            ? a.rainfallChangePercent() + w * (b.rainfallChangePercent() - a.rainfallChangePercent())
+            : a.temperatureChangeC() + w * (b.temperatureChangeC() - a.temperatureChangeC());
+      }
+    }
+    DeltaChange last = anchors.get(anchors.size() - 1);
+    return rainfall ? last.rainfallChangePercent() : last.temperatureChangeC();
+  }
+
+  /** A study of a loaded scenario: every path and replicate, forcing computed. */
+  public static Study study(LoadedScenario loaded) {
+    Scenario sc = loaded.scenario();
+    ModelParameters params = parameters(sc);
+    BaselineClimate baseline = baseline(loaded.baseline());
+    BurnBlock reference = sc.park().blocks().get(0);
+    int[] seasons = ForcingBuilder.fireSeasonMonths(baseline, reference.altitudeM(),
+        reference.latitudeDeg());
+    return new Study(params, baseline, paths(loaded), sc.stochastic().replicates(),
+        sc.stochastic().seed(), sc.stochastic().interannualVariabilityFactor(), seasons);
+  }
+
+  /** A management plan for a policy, against the scenario's blocks. */
+  public static ManagementPlan plan(Policy policy, Scenario sc) {
+    List<String> names = new ArrayList<>();
+    int[] points = new int[sc.park().blocks().size()];
+    for (int b = 0; b < points.length; b++) {
+      names.add(sc.park().blocks().get(b).name());
+      points[b] = sc.park().blocks().get(b).artificialWaterPoints();
+    }
+    return ManagementPlan.fromPolicy(policy, names, points, sc.startYear());
+  }
+}

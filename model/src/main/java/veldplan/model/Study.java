@@ -1,0 +1,89 @@
+package veldplan.model;
+
+import java.util.List;
+import veldplan.model.climate.BaselineClimate;
+import veldplan.model.climate.ClimatePathModel;
+import veldplan.model.climate.Weather;
+import veldplan.model.climate.WeatherGenerator;
+import veldplan.shared.rng.Seeds;
+
+/**
+ * A park under a set of climate paths and stochastic replicates: the parameters, and the
+ * policy-independent forcing of every (path, replicate), computed once and shared read-only by
+ * every policy (common random numbers). Immutable after construction; thread-safe.
+ *
+ * <p>Seeds form a tree: scenario seed &rarr; path &rarr; replicate &rarr; one key per process
+ * ({@link Seeds}). Adding replicates or paths leaves the others' random numbers unchanged.
+ */
+public final class Study {
+  private final ModelParameters params;
+  private final List<ClimatePathModel> paths;
+  private final int replicates;
+  private final long seed;
+  private final Forcing[] forcing;
+
+  /**
+   * Builds the forcing of every path and replicate.
+   *
+   * @param params             model parameters
+   * @param baseline           observed monthly climate
+   * @param paths              climate paths, each covering {@code params.years()} years
+   * @param replicates         replicates per path
+   * @param seed               the scenario seed
+   * @param variabilityFactor  interannual rainfall variability factor (1 = as observed)
+   * @param fireSeasons        early/late burning months, from
+   *                           {@link ForcingBuilder#fireSeasonMonths}
+   */
+  public Study(ModelParameters params, BaselineClimate baseline, List<ClimatePathModel> paths,
+      int replicates, long seed, double variabilityFactor, int[] fireSeasons) {
+    if (replicates < 1) {
+      throw new IllegalArgumentException("replicates must be >= 1: " + replicates);
+    }
+    this.params = params;
+    this.paths = List.copyOf(paths);
+    this.replicates = replicates;
+    this.seed = seed;
+    this.forcing = new Forcing[paths.size() * replicates];
+    for (int path = 0; path < paths.size(); path++) {
+      ClimatePathModel climate = paths.get(path);
+      if (climate.years() != params.years()) {
+        throw new IllegalArgumentException("climate path " + climate.name() + " covers "
+            + climate.years() + " years, the horizon is " + params.years());
+      }
+      long pathSeed = Seeds.pathSeed(seed, path);
+      for (int replicate = 0; replicate < replicates; replicate++) {
+        long[] keys = Seeds.processKeys(Seeds.replicateSeed(pathSeed, replicate));
+        Weather weather = WeatherGenerator.generate(baseline, climate, variabilityFactor,
+            keys[Seeds.Process.WEATHER.ordinal()]);
+        forcing[path * replicates + replicate] = ForcingBuilder.build(params, weather,
+            fireSeasons, keys[Seeds.Process.FIRE.ordinal()],
+            keys[Seeds.Process.DEMOGRAPHY.ordinal()]);
+      }
+    }
+  }
+
+  /** Model parameters. */
+  public ModelParameters parameters() {
+    return params;
+  }
+
+  /** Climate paths in scenario order. */
+  public List<ClimatePathModel> paths() {
+    return paths;
+  }
+
+  /** Replicates per path. */
+  public int replicates() {
+    return replicates;
+  }
+
+  /** The scenario seed. */
+  public long seed() {
+    return seed;
+  }
+
+  /** The forcing of replicate {@code replicate} of path {@code path}. */
+  public Forcing forcing(int path, int replicate) {
+    return forcing[path * replicates + replicate];
+  }
+}

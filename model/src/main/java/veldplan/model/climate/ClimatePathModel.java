@@ -1,0 +1,71 @@
+package veldplan.model.climate;
+
+/**
+ * A climate path as the weather generator uses it: per simulated year, a rainfall factor and a
+ * temperature shift relative to the baseline (delta change), or explicit monthly series; and the
+ * CO2 concentration.
+ */
+public final class ClimatePathModel {
+  final String name;
+  final double[] rainfallFactor;
+  final double[] temperatureShiftC;
+  final double[] co2Ppm;
+  final double[] explicitRainfallMm;
+  final double[] explicitTminC;
+  final double[] explicitTmaxC;
+
+  private ClimatePathModel(String name, double[] rainfallFactor, double[] temperatureShiftC,
+      double[] co2Ppm, double[] explicitRainfallMm, double[] explicitTminC,
+      double[] explicitTmaxC) {
+    this.name = name;
+    this.rainfallFactor = rainfallFactor;
+    this.temperatureShiftC = temperatureShiftC;
+    this.co2Ppm = co2Ppm.clone();
+    this.explicitRainfallMm = explicitRainfallMm;
+    this.explicitTminC = explicitTminC;
+    this.explicitTmaxC = explicitTmaxC;
+  }
+
+  /**
+   * A delta-change path: baseline years are resampled, their rainfall multiplied by
+   * {@code rainfallFactor[year]} and temperatures shifted by {@code temperatureShiftC[year]}.
+   */
+  public static ClimatePathModel deltaChange(String name, double[] rainfallFactor,
+      double[] temperatureShiftC, double[] co2Ppm) {
+    if (rainfallFactor.length != co2Ppm.length || temperatureShiftC.length != co2Ppm.length) {
+      throw new IllegalArgumentException("delta arrays need one value per year");
+    }
+    return new ClimatePathModel(name, rainfallFactor.clone(), temperatureShiftC.clone(), co2Ppm,
+        null, null, null);
+  }
+
+  /** An explicit path: the same monthly series in every replicate. */
+  public static ClimatePathModel explicit(String name, double[] rainfallMm, double[] tminC,
+      double[] tmaxC, double[] co2Ppm) {
+    if (rainfallMm.length != co2Ppm.length * 12) {
+      throw new IllegalArgumentException("explicit series needs 12 months per year");
+    }
+    return new ClimatePathModel(name, null, null, co2Ppm, rainfallMm.clone(), tminC.clone(),
+        tmaxC.clone());
+  }
+
+  /** The path's name. */
+  public String name() {
+    return name;
+  }
+
+  /** Number of simulated years covered. */
+  public int years() {
+    return co2Ppm.length;
+  }
+
+  /** True when the path gives explicit monthly series. */
+  public boolean isExplicit() {
+    return explicitRainfallMm != null;
+  }
+
+  /** CO2 in simulated year {@code year} (ppm). */
+  public double co2Ppm(int year) {
+    return co2Ppm[year];
+  }
+}

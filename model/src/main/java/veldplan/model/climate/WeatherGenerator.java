@@ -1,0 +1,58 @@
+package veldplan.model.climate;
+
+import veldplan.shared.rng.CounterRandom;
+
+/**
+ * Makes the weather of one replicate of one climate path.
+ *
+ * <p><b>Method.</b> For a delta-change path, each simulated year takes the months of one baseline
+ * year drawn with replacement (one draw per year from the weather stream), so the seasonal cycle,
+ * the correlation of rainfall and temperature within a year and the observed year-to-year
+ * variability are kept. The year's rainfall total is then stretched away from the baseline mean
+ * by the scenario's variability factor (1 keeps it as observed; months keep their shares), and the
+ * delta change of that year applied: rainfall times the path's factor, temperatures plus its
+ * shift. This is the delta-change method of climate impact studies (e.g. Hay, Wilby &amp; Leavesley
+ * 2000, J. Am. Water Resour. Assoc. 36: 387–397, from memory) applied to a bootstrap of years.
+ * An explicit path is used as given in every replicate.
+ */
+public final class WeatherGenerator {
+  private WeatherGenerator() {}
+
+  /**
+   * @param baseline             observed monthly climate
+   * @param path                 the climate path
+   * @param variabilityFactor    stretch of annual rainfall about the baseline mean (1 = observed)
+   * @param weatherKey           the replicate's weather stream key
+   */
+  public static Weather generate(BaselineClimate baseline, ClimatePathModel path,
+      double variabilityFactor, long weatherKey) {
+    int years = path.years();
+    double[] rain = new double[years * 12];
+    double[] tmin = new double[years * 12];
+    double[] tmax = new double[years * 12];
+    if (path.isExplicit()) {
+      return new Weather(path.explicitRainfallMm, path.explicitTminC, path.explicitTmaxC,
+          path.co2Ppm);
+    }
+    double mean = baseline.meanAnnualRainfallMm;
+    for (int year = 0; year < years; year++) {
+      int drawn = (int) (CounterRandom.uniform(weatherKey, year, 0) * baseline.years);
+      double total = 0;
+      for (int m = 0; m < 12; m++) {
+        total += baseline.rainfallMm[drawn * 12 + m];
+      }
+      double stretched = Math.max(0, mean + variabilityFactor * (total - mean));
+      double scale = total > 0 ? stretched / total : 0;
+      double factor = Math.max(0, path.rainfallFactor[year]);
+      double shift = path.temperatureShiftC[year];
+      for (int m = 0; m < 12; m++) {
+        int from = drawn * 12 + m;
+        int to = year * 12 + m;
+        rain[to] = baseline.rainfallMm[from] * scale * factor;
+        tmin[to] = baseline.tminC[from] + shift;
+        tmax[to] = baseline.tmaxC[from] + shift;
+      }
+    }
+    return new Weather(rain, tmin, tmax, path.co2Ppm);
+  }
+}

@@ -1,0 +1,228 @@
+package veldplan.optimiser.cli;
+
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.SerializationFeature;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
+import java.time.Duration;
+import java.time.Instant;
+import java.util.ArrayList;
+import java.util.HexFormat;
+import java.util.List;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+import java.util.concurrent.atomic.AtomicInteger;
+import me.tongfei.progressbar.ProgressBar;
+import me.tongfei.progressbar.ProgressBarBuilder;
+import me.tongfei.progressbar.ProgressBarStyle;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+import veldplan.model.Ensemble;
+import veldplan.model.ManagementPlan;
+import veldplan.model.ParametersFromScenario;
+import veldplan.model.Study;
+import veldplan.model.Trajectory;
+import veldplan.optimiser.report.SimulationSummary;
+import veldplan.optimiser.report.TrajectoryCsv;
+import veldplan.shared.io.AtomicFiles;
+import veldplan.shared.scenario.ClimatePath;
+import veldplan.shared.scenario.Climate;
+import veldplan.shared.scenario.LoadedScenario;
+import veldplan.shared.scenario.Policy;
+import veldplan.shared.scenario.Scenario;
+import veldplan.shared.scenario.ScenarioException;
+import veldplan.shared.scenario.ScenarioReader;
+import veldplan.shared.scenario.Stochastic;
+
+/** {@code veldplan simulate}: runs one policy on every climate path and replicate. */
+@Command(name = "simulate", mixinStandardHelpOptions = true,
+    description = {
+        "Runs one management policy on every climate path and stochastic replicate of a",
+        "scenario and writes the yearly trajectories of every block, guild and cost."},
+    footer = {"", "Writes OUT/trajectories.csv and OUT/run.json (settings and provenance).",
+        "Exit status: 0 done, 1 failure, 2 bad input (nothing written)."})
+public final class SimulateCommand implements Callable<Integer> {
+  @Spec
+  CommandSpec spec;
+
+  @Parameters(index = "0", paramLabel = "SCENARIO", description = "Scenario file (.yaml or .json).")
+  Path scenarioFile;
+
+  @Option(names = "--policy", paramLabel = "FILE",
+      description = "Policy file to simulate instead of the scenario's own policy.")
+  Path policyFile;
+
+  @Option(names = "--path", paramLabel = "NAME",
+      description = "Simulate only this climate path (default: all).")
+  String pathName;
+
+  @Option(names = "--replicates", paramLabel = "N",
+      description = "Replicates per climate path (default: the scenario's).")
+  Integer replicates;
+
+  @Option(names = "--seed", paramLabel = "S", description = "Scenario seed (default: the scenario's).")
+  Long seed;
+
+  @Option(names = "--threads", paramLabel = "N",
+      description = "Worker threads (default: all cores). Results do not depend on it.")
+  Integer threads;
+
+  @Option(names = "--out", paramLabel = "DIR", required = true, description = "Output folder.")
+  Path out;
+
+  @Option(names = "--no-progress", description = "Do not show the progress bar.")
+  boolean noProgress;
+
+  @Option(names = "--debug", description = "Show stack traces of failures.")
+  boolean debug;
+
+  @Override
+  public Integer call() {
+    PrintWriter err = spec.commandLine().getErr();
+    PrintWriter stdout = spec.commandLine().getOut();
+    Instant started = Instant.now();
+    LoadedScenario loaded;
+    Policy policy;
+    try {
+      loaded = ScenarioReader.load(scenarioFile);
+      Scenario sc = loaded.scenario();
+      policy = policyFile == null ? sc.policy() : ScenarioReader.readPolicy(policyFile, sc);
+      List<String> problems = new ArrayList<>();
+      if (replicates != null && (replicates < 1 || replicates > 100_000)) {
+        problems.add("--replicates: " + replicates + " (expected 1 <= N <= 100000)");
+      }
+      if (threads != null && (threads < 1 || threads > 1024)) {
+        problems.add("--threads: " + threads + " (expected 1 <= N <= 1024)");
+      }
+      List<ClimatePath> paths = sc.climate().paths();
+      if (pathName != null) {
+        paths = paths.stream().filter(p -> p.name().equals(pathName)).toList();
+        if (paths.isEmpty()) {
+          List<String> names = sc.climate().paths().stream().map(ClimatePath::name).toList();
+          problems.add("--path: no climate path named \"" + pathName + "\" in "
+              + scenarioFile + " (expected one of " + String.join(", ", names) + ")");
+        }
+      }
+      if (!problems.isEmpty()) {
+        err.println("error: " + problems.size() + " problem(s) on the command line");
+        problems.forEach(p -> err.println("  " + p));
+        return ExitCodes.BAD_INPUT;
+      }
+      Stochastic st = sc.stochastic();
+      sc = sc.withStochastic(new Stochastic(replicates == null ? st.replicates() : replicates,
+          seed == null ? st.seed() : seed, st.interannualVariabilityFactor()));
+      sc = new Scenario(sc.name(), sc.startYear(), sc.horizonYears(), sc.park(), sc.guilds(),
+          sc.predators(), sc.elephants(), new Climate(sc.climate().baselineCsv(), paths),
+          sc.stochastic(), policy, sc.costs());
+      loaded = new LoadedScenario(loaded.file(), sc, loaded.baseline(), loaded.pathSeries(),
+          loaded.sha256());
+    } catch (ScenarioException e) {
+      err.print(e.report());
+      err.flush();
+      return ExitCodes.BAD_INPUT;
+    }
+
+    try {
+      Scenario sc = loaded.scenario();
+      Study study = ParametersFromScenario.study(loaded);
+      ManagementPlan plan = ParametersFromScenario.plan(policy, sc);
+      int workers = threads != null ? threads : Runtime.getRuntime().availableProcessors();
+      int total = study.paths().size() * study.replicates();
+      Trajectory[][] runs;
+      boolean showBar = !noProgress && System.console() != null;
+      if (showBar) {
+        try (ProgressBar bar = new ProgressBarBuilder().setTaskName("simulating")
+            .setInitialMax(total).setStyle(ProgressBarStyle.ASCII).setUnit(" runs", 1)
+            .showSpeed().build()) {
+          runs = Ensemble.run(study, plan, workers, bar::step);
+        }
+      } else {
+        AtomicInteger done = new AtomicInteger();
+        runs = Ensemble.run(study, plan, workers, done::incrementAndGet);
+      }
+      List<String> pathNames = new ArrayList<>();
+      study.paths().forEach(p -> pathNames.add(p.name()));
+
+      Files.createDirectories(out);
+      Path csv = out.resolve("trajectories.csv");
+      Trajectory[][] written = runs;
+      AtomicFiles.write(csv, w -> TrajectoryCsv.write(w, study.parameters(), pathNames, written));
+      Instant finished = Instant.now();
+      AtomicFiles.writeString(out.resolve("run.json"), provenance(loaded, policy, pathNames,
+          study, workers, started, finished));
+
+      stdout.println(SimulationSummary.format(study.parameters(), pathNames, runs,
+          policy.name()));
+      stdout.printf(Locale.ROOT, "Wrote %s (%d runs) and %s in %.1f s.%n", csv, total,
+          out.resolve("run.json"), Duration.between(started, finished).toMillis() / 1000.0);
+      stdout.println();
+      stdout.println(Cautions.TEXT);
+      stdout.flush();
+      return ExitCodes.OK;
+    } catch (IOException e) {
+      err.println("error: could not write to " + out + ": " + e.getMessage());
+      if (debug) {
+        e.printStackTrace(err);
+      }
+      return ExitCodes.FAILURE;
+    } catch (RuntimeException e) {
+      err.println("error: the simulation failed: " + e.getMessage());
+      err.println("Scenario " + scenarioFile + ", seed " + loaded.scenario().stochastic().seed()
+          + "; rerun with --debug for the stack trace and report it with the scenario.");
+      if (debug) {
+        e.printStackTrace(err);
+      }
+      return ExitCodes.FAILURE;
+    }
+  }
+
+  private String provenance(LoadedScenario loaded, Policy policy, List<String> pathNames,
+      Study study, int workers, Instant started, Instant finished) throws IOException {
+    ObjectMapper json = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
+    ObjectNode root = json.createObjectNode();
+    root.put("tool", "veldplan");
+    root.put("version", Main.version());
+    root.put("command", "simulate");
+    root.put("scenarioFile", loaded.file().toString());
+    root.put("scenarioSha256", loaded.sha256());
+    root.put("policy", policy.name());
+    if (policyFile != null) {
+      root.put("policyFile", policyFile.toString());
+      root.put("policySha256", sha256(policyFile));
+    }
+    root.put("seed", study.seed());
+    root.put("replicates", study.replicates());
+    ArrayNode paths = root.putArray("climatePaths");
+    pathNames.forEach(paths::add);
+    root.put("startYear", study.parameters().startYear());
+    root.put("horizonYears", study.parameters().years());
+    root.put("threads", workers);
+    root.put("randomNumbers", "counter-based SplitMix64 mixing; seed tree scenario > path > "
+        + "replicate > process");
+    root.put("java", System.getProperty("java.vm.name") + " " + System.getProperty("java.version"));
+    root.put("started", started.toString());
+    root.put("finished", finished.toString());
+    ArrayNode files = root.putArray("files");
+    files.add("trajectories.csv");
+    root.put("cautions", Cautions.TEXT.replace(System.lineSeparator(), " "));
+    return json.writeValueAsString(root) + "\n";
+  }
+
+  private static String sha256(Path file) throws IOException {
+    try {
+      MessageDigest digest = MessageDigest.getInstance("SHA-256");
+      return HexFormat.of().formatHex(digest.digest(Files.readAllBytes(file)));
+    } catch (NoSuchAlgorithmException e) {
+      throw new IllegalStateException(e);
+    }
+  }
+}
