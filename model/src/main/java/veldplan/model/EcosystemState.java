@@ -29,13 +29,18 @@ public final class EcosystemState {
   final double[] coverageHistory;
   /** Water points open last year [block]. */
   final int[] waterPointsOpen;
+  /** Share of last year's grass production eaten [block]: sets this year's tall-grass share. */
+  final double[] grazedFraction;
 
   // ---- this year's flows
   final double[] basalAreaM2PerHa;
   final double[] grassProductionKgPerHa;
   final double[] fuelKgPerHa;
-  final double[] browseKgPerHa;
-  final double[] browseAllKgPerHa;
+  /** Leaf production below 2 m (kg DM/ha/yr) [block]. */
+  final double[] lowBrowseKgPerHa;
+  /** Leaf production above 2 m (kg DM/ha/yr) [block]. */
+  final double[] highBrowseKgPerHa;
+  /** Share of low browse eaten this year [block]. */
   final double[] browsePressure;
   final double[] plannedBurntFraction;
   final double[] plannedIntensityKwPerM;
@@ -48,6 +53,10 @@ public final class EcosystemState {
   final double[] forageKg;
   final double[] pressureKg;
   final double[] predationHazard;
+  /** Share of each herbivore's demand it could eat this year (0..1) [herbivore]. */
+  final double[] satisfaction;
+  /** Usable forage per category this year (kg DM) [block * 4 + category]. */
+  final double[] categorySupplyKg;
   /** Biomass of the prey each predator hunts (kg) [predator]. */
   final double[] preyBiomassKg;
   double costBurning;
@@ -58,7 +67,9 @@ public final class EcosystemState {
   double femalesTreated;
 
   // ---- scratch
-  /** Resource shares p[herbivore * categories + category], categories = blocks * 2. */
+  /** Tall-grass share of this year's production [block]. */
+  final double[] tallShare;
+  /** Resource shares p[herbivore * categories + category], categories = blocks * 3. */
   final double[] resourceShare;
   final double[] nextClasses = new double[TreeClass.COUNT];
 
@@ -74,11 +85,12 @@ public final class EcosystemState {
     predatorAbundance = new double[predators];
     coverageHistory = new double[lagSlots];
     waterPointsOpen = new int[blocks];
+    grazedFraction = new double[blocks];
     basalAreaM2PerHa = new double[blocks];
     grassProductionKgPerHa = new double[blocks];
     fuelKgPerHa = new double[blocks];
-    browseKgPerHa = new double[blocks];
-    browseAllKgPerHa = new double[blocks];
+    lowBrowseKgPerHa = new double[blocks];
+    highBrowseKgPerHa = new double[blocks];
     browsePressure = new double[blocks];
     plannedBurntFraction = new double[blocks];
     plannedIntensityKwPerM = new double[blocks];
@@ -90,8 +102,11 @@ public final class EcosystemState {
     forageKg = new double[herbivores];
     pressureKg = new double[herbivores];
     predationHazard = new double[herbivores];
+    satisfaction = new double[herbivores];
+    categorySupplyKg = new double[blocks * Herbivory.CATEGORIES_PER_BLOCK];
     preyBiomassKg = new double[predators];
-    resourceShare = new double[herbivores * blocks * 2];
+    tallShare = new double[blocks];
+    resourceShare = new double[herbivores * blocks * Herbivory.CATEGORIES_PER_BLOCK];
   }
 
   /** Sets the state to the scenario's initial conditions. */
@@ -104,6 +119,7 @@ public final class EcosystemState {
     System.arraycopy(p.predators().initialAbundance, 0, predatorAbundance, 0, predators);
     System.arraycopy(bp.artificialWaterPoints, 0, waterPointsOpen, 0, blocks);
     java.util.Arrays.fill(coverageHistory, 0);
+    java.util.Arrays.fill(grazedFraction, 0);
   }
 
   /** Trees per ha of class {@code k} in {@code block}. */

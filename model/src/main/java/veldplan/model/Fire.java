@@ -8,7 +8,9 @@ import veldplan.shared.rng.CounterRandom;
  * <h2>Spread</h2>
  * The share of a block a fire can carry through rises with fuel load as a logistic curve around
  * {@link FireParameters#minimumFuelKgPerHa()}: grass fires need continuous fuel, and burnt area
- * rises with grass fuel from arid to mesic savanna (Archibald et al. 2009, from memory).
+ * rises with grass fuel from arid to mesic savanna (Archibald et al. 2009, from memory). A fire
+ * whose Trollope intensity is not positive (too little fuel for its moisture and humidity) does
+ * not carry at all.
  *
  * <h2>Planned burns</h2>
  * In the years the policy schedules (every fire return interval, staggered by block), a planned
@@ -45,23 +47,25 @@ final class Fire {
       double planned = 0;
       double plannedIntensity = 0;
       if (plan.burnsIn(b, year)) {
-        planned = plan.targetFractionBurnt[b] * spread;
         double offset = plan.lateDrySeason[b] ? f.fireOffsetLateKwPerM[at]
             : f.fireOffsetEarlyKwPerM[at];
         plannedIntensity = Math.max(0, offset + fuelTerm);
+        // A fire whose Trollope intensity is not positive does not carry.
+        planned = plannedIntensity > 0 ? plan.targetFractionBurnt[b] * spread : 0;
       }
       double rate = fp.wildfireIgnitionsPerYear() * spread
           * curedSeasonFactor(fp, f.growingDays[at]);
       double ignition = CounterRandom.uniform(f.fireKey, year, b * 4);
       double extent = CounterRandom.uniform(f.fireKey, year, b * 4 + 1);
+      double wildIntensity = Math.max(0, f.fireOffsetLateKwPerM[at] + fuelTerm);
       double wild = 0;
-      if (ignition < 1 - Math.exp(-rate)) {
+      if (ignition < 1 - Math.exp(-rate) && wildIntensity > 0) {
         wild = (1 - planned) * spread * (0.3 + 0.7 * extent);
       }
       s.plannedBurntFraction[b] = planned;
       s.plannedIntensityKwPerM[b] = plannedIntensity;
       s.wildBurntFraction[b] = wild;
-      s.wildIntensityKwPerM[b] = wild > 0 ? Math.max(0, f.fireOffsetLateKwPerM[at] + fuelTerm) : 0;
+      s.wildIntensityKwPerM[b] = wild > 0 ? wildIntensity : 0;
       s.leftoverGrassKgPerHa[b] = fuel * (1 - planned - wild);
     }
   }

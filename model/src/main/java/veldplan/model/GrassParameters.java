@@ -12,7 +12,18 @@ package veldplan.model;
  * @param carryOverFraction share of last year's unburnt, uneaten grass still standing as fuel
  *     (fraction); small, as Midgley et al. (2006) found carry-over unimportant for burnt area
  * @param maxFuelKgPerHa ceiling on standing fuel (kg DM/ha)
- * @param properUseFraction share of the year's production herbivores can eat (fraction)
+ * @param properUseFraction share of the year's grass production herbivores can use (fraction).
+ *     Far below the rangeland "take half" rule because the dry season, when grass is cured and
+ *     poor, limits savanna herbivores (Illius &amp; O'Connor 2000, from memory); 0.2 puts the
+ *     example's starting herbivore biomass near the model's capacity, as the Coe et al. (1976)
+ *     regression of herbivore biomass on rainfall suggests (from memory)
+ * @param browseUseFraction share of the year's leaf production browsers can use (fraction);
+ *     much browse is unpalatable, defended or shed in the dry season (our calibration)
+ * @param tallGrassMaxShare share of production that stands as tall grass when nothing was grazed
+ *     the year before (our calibration)
+ * @param grazingLawnEffect how far grazing turns tall grass into short grass (grazing lawns):
+ *     the tall share falls by this fraction when last year's grazing took all the usable grass
+ *     (our calibration)
  * @param c4TminC base temperature of the C4 grass response, Yan &amp; Hunt (1999) form (°C)
  * @param c4ToptC optimum temperature of C4 grass (°C)
  * @param c4TmaxC ceiling temperature of C4 grass (°C)
@@ -24,6 +35,9 @@ public record GrassParameters(
     double carryOverFraction,
     double maxFuelKgPerHa,
     double properUseFraction,
+    double browseUseFraction,
+    double tallGrassMaxShare,
+    double grazingLawnEffect,
     double c4TminC,
     double c4ToptC,
     double c4TmaxC,
@@ -34,6 +48,6 @@ public record GrassParameters(
    * (methods sheet §6, from memory); we take 10 / 32 / 44.
    */
   public static GrassParameters defaults() {
-    return new GrassParameters(7.0, 0.1, 0.15, 6000, 0.45, 10, 32, 44, 0.3);
+    return new GrassParameters(7.0, 0.1, 0.15, 6000, 0.2, 0.10, 0.6, 0.7, 10, 32, 44, 0.3);
   }
 }

@@ -23,11 +23,16 @@ public final class HerbivoreParameters {
   final double[] quasiExtinctionAbundance;
   /** Feeding role per guild (ordinal of GuildRole); -1 for elephants. */
   final int[] role;
+  /**
+   * Share of each forage category the herbivore accepts (0..1), [herbivore * 4 + category] in
+   * the order tall grass, short grass, low browse, high browse ({@link Herbivory}).
+   */
+  final double[] acceptance;
 
   HerbivoreParameters(String[] names, double[] bodyMassKg, double[] intakeKgPerYear,
       double[] grassDietFraction, double[] reachKm, double[] maxGrowthRatePerYear,
       double[] noiseSd, double[] initialAbundance, double[] quasiExtinctionAbundance,
-      int[] role) {
+      int[] role, double[] acceptance) {
     this.count = names.length;
     this.elephant = count - 1;
     this.names = names.clone();
@@ -40,6 +45,11 @@ public final class HerbivoreParameters {
     this.initialAbundance = initialAbundance.clone();
     this.quasiExtinctionAbundance = quasiExtinctionAbundance.clone();
     this.role = role.clone();
+    if (acceptance.length != count * Herbivory.CATEGORIES_PER_BLOCK) {
+      throw new IllegalArgumentException("acceptance needs " + Herbivory.CATEGORIES_PER_BLOCK
+          + " values per herbivore");
+    }
+    this.acceptance = acceptance.clone();
   }
 
   /** Number of herbivores including elephants. */

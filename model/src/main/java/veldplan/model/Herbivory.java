@@ -15,20 +15,34 @@ import veldplan.model.ecology.WaterCoverage;
  * refuge (as argued for roan antelope by Harrington et al. 1999, from memory).
  *
  * <h2>Forage</h2>
- * Grass production and browse production (leaf per tree by height class; elephants reach all
- * heights, other browsers only what stands within reach) within reach, times the proper-use
- * share, split by the guild's diet share. Elephants choose browse over grass with a fixed
- * preference (Chesson-type selection), so they shift to grass when browse gets scarce.
+ * Grass production and browse production (leaf per tree by height class, below and above
+ * 2 m) within reach, times the usable share, split by the guild's diet share. Grass is tall or
+ * short: the share standing tall falls with the share eaten the year before (grazing makes
+ * lawns). Each feeding role accepts the four kinds of forage differently, so heavy bulk grazing near water takes the tall grass the selective
+ * grazer needs and makes the short swards mixed feeders prefer. Elephants choose browse over
+ * grass with a fixed preference (Chesson-type selection), so they shift to grass when browse gets
+ * scarce.
  *
  * <h2>Sharing</h2>
- * Resources are (block, grass|browse) categories. Each guild's use of them gives MacArthur &amp;
- * Levins (1967, Am. Nat. 101: 377–385) competition coefficients
- * alpha_ij = sum_k p_ik p_jk / sum_k p_ik^2, from memory. A guild's forage pressure is its own
- * demand plus alpha-weighted demand of the others; guilds that share little (different diet,
- * different distance from water) can coexist. What each guild eats is its demand, cut back
- * when the pressure exceeds its forage, spread over the categories it uses.
+ * Resources are (block, tall grass|short grass|low browse|high browse) categories. Each
+ * herbivore spreads its demand (head x intake) over the categories in proportion to what it can
+ * use of each (p_hk). In each category, the herbivore meets a depletion: the demand of all
+ * herbivores on the part of the block within its reach, over the usable supply there. Its food
+ * limitation is the p-weighted mean depletion (1 = demand equals supply), and it eats its demand
+ * in each category, cut back pro rata where that category is over-used. Herbivores that share a
+ * category feel the same depletion of it, so none is excluded merely by being outnumbered; what
+ * differs between them is the mix of categories they use (diet, tall or short grass, low or
+ * high browse, distance from water). This is our design: exploitative competition for shared
+ * resource categories with ratio-dependent limitation (Arditi &amp; Ginzburg 1989, from memory).
  */
 final class Herbivory {
+  /** Resource categories per block: tall grass, short grass, low browse, high browse. */
+  static final int CATEGORIES_PER_BLOCK = 4;
+  static final int TALL = 0;
+  static final int SHORT = 1;
+  static final int LOW_BROWSE = 2;
+  static final int HIGH_BROWSE = 3;
+
   private Herbivory() {}
 
   /** Recomputes every herbivore's reach for the water points open this year. */
@@ -48,32 +62,41 @@ final class Herbivory {
     BlockParameters bp = p.blocks();
     HerbivoreParameters hp = p.herbivores();
     TreeParameters t = p.trees();
-    double use = p.grass().properUseFraction();
+    GrassParameters gp = p.grass();
+    double grassUse = gp.properUseFraction();
+    double browseUse = gp.browseUseFraction();
     int blocks = s.blocks;
     int herbivores = hp.count;
-    int categories = blocks * 2;
+    int categories = blocks * CATEGORIES_PER_BLOCK;
+    double[] accept = hp.acceptance;
 
     for (int b = 0; b < blocks; b++) {
-      double reachable = 0;
-      double all = 0;
+      double low = 0;
+      double high = 0;
       int trees = b * TreeClass.COUNT;
       for (int k = 0; k < TreeClass.COUNT; k++) {
         double leaf = s.treesPerHa[trees + k] * t.browseKgPerTreePerYear[k];
-        all += leaf;
-        reachable += leaf * t.browseReachFraction[k];
+        low += leaf * t.lowBrowseShare[k];
+        high += leaf * (1 - t.lowBrowseShare[k]);
       }
-      s.browseKgPerHa[b] = reachable;
-      s.browseAllKgPerHa[b] = all;
+      s.lowBrowseKgPerHa[b] = low;
+      s.highBrowseKgPerHa[b] = high;
+      double intensity = Math.min(1, s.grazedFraction[b] / grassUse);
+      s.tallShare[b] = gp.tallGrassMaxShare() * (1 - gp.grazingLawnEffect() * intensity);
     }
 
-    // Elephants' diet: browse preferred over grass in proportion to what is within reach.
+    // Elephants' diet: browse preferred over grass in proportion to what they accept in reach.
     int e = hp.elephant;
+    int ea = e * CATEGORIES_PER_BLOCK;
     double grassReach = 0;
     double browseReach = 0;
     for (int b = 0; b < blocks; b++) {
       double area = bp.areaHa[b] * s.reach[e * blocks + b];
-      grassReach += area * s.grassProductionKgPerHa[b];
-      browseReach += area * s.browseAllKgPerHa[b];
+      double tall = s.tallShare[b];
+      grassReach += area * s.grassProductionKgPerHa[b]
+          * (accept[ea + TALL] * tall + accept[ea + SHORT] * (1 - tall));
+      browseReach += area * (accept[ea + LOW_BROWSE] * s.lowBrowseKgPerHa[b]
+          + accept[ea + HIGH_BROWSE] * s.highBrowseKgPerHa[b]);
     }
     double preference = p.elephants().browsePreference();
     double weighted = grassReach + preference * browseReach;
@@ -84,20 +107,34 @@ final class Herbivory {
       }
     }
 
-    // Forage within reach per category, and its shares p_hk.
+    // Usable forage per category (tall grass, short grass, low and high browse of each block).
+    double[] supply = s.categorySupplyKg;
+    for (int b = 0; b < blocks; b++) {
+      int at = CATEGORIES_PER_BLOCK * b;
+      double grass = bp.areaHa[b] * grassUse * s.grassProductionKgPerHa[b];
+      supply[at + TALL] = grass * s.tallShare[b];
+      supply[at + SHORT] = grass * (1 - s.tallShare[b]);
+      supply[at + LOW_BROWSE] = bp.areaHa[b] * browseUse * s.lowBrowseKgPerHa[b];
+      supply[at + HIGH_BROWSE] = bp.areaHa[b] * browseUse * s.highBrowseKgPerHa[b];
+    }
+
+    // What each herbivore can use: supply within its reach that it accepts, split by its diet;
+    // and its shares p_hk of that total.
     double[] share = s.resourceShare;
     for (int h = 0; h < herbivores; h++) {
       double grassShare = s.grassDiet[h];
       double forage = 0;
       int row = h * categories;
+      int ha = h * CATEGORIES_PER_BLOCK;
       for (int b = 0; b < blocks; b++) {
-        double area = bp.areaHa[b] * s.reach[h * blocks + b] * use;
-        double browse = h == e ? s.browseAllKgPerHa[b] : s.browseKgPerHa[b];
-        double grass = area * grassShare * s.grassProductionKgPerHa[b];
-        double leaves = area * (1 - grassShare) * browse;
-        share[row + 2 * b] = grass;
-        share[row + 2 * b + 1] = leaves;
-        forage += grass + leaves;
+        double reach = s.reach[h * blocks + b];
+        int at = CATEGORIES_PER_BLOCK * b;
+        for (int c = 0; c < CATEGORIES_PER_BLOCK; c++) {
+          double pool = c < LOW_BROWSE ? grassShare : 1 - grassShare;
+          double usable = reach * accept[ha + c] * pool * supply[at + c];
+          share[row + at + c] = usable;
+          forage += usable;
+        }
       }
       s.forageKg[h] = forage;
       if (forage > 0) {
@@ -107,54 +144,63 @@ final class Herbivory {
       }
     }
 
-    // Pressure with MacArthur–Levins overlaps.
-    for (int h = 0; h < herbivores; h++) {
-      int row = h * categories;
-      double self = 0;
-      for (int c = 0; c < categories; c++) {
-        self += share[row + c] * share[row + c];
-      }
-      double pressure = s.abundance[h] * hp.intakeKgPerYear[h];
-      if (self > 0) {
-        for (int o = 0; o < herbivores; o++) {
-          if (o == h || s.abundance[o] == 0) {
-            continue;
-          }
-          int other = o * categories;
-          double overlap = 0;
-          for (int c = 0; c < categories; c++) {
-            overlap += share[row + c] * share[other + c];
-          }
-          pressure += overlap / self * s.abundance[o] * hp.intakeKgPerYear[o];
-        }
-      }
-      s.pressureKg[h] = pressure;
-    }
-
-    // What is eaten, by block: grass from fuel, browse as pressure on the trees.
+    // Depletion each herbivore meets in each category: the demand of every herbivore on the
+    // part of the block within its reach, over the supply there. Reach areas are nested (all
+    // centred on the same water), and each herbivore spreads its demand evenly over its reach.
     for (int b = 0; b < blocks; b++) {
       s.browsePressure[b] = 0;
       s.elephantsPerKm2[b] = 0;
+      s.grazedFraction[b] = 0;
     }
     for (int h = 0; h < herbivores; h++) {
       double demand = s.abundance[h] * hp.intakeKgPerYear[h];
-      if (demand == 0 || s.forageKg[h] == 0) {
-        continue;
-      }
-      double eaten = demand * Math.min(1, s.forageKg[h] / s.pressureKg[h]);
       int row = h * categories;
+      double index = 0;
+      double satisfied = 0;
       for (int b = 0; b < blocks; b++) {
-        double grassKgPerHa = eaten * share[row + 2 * b] / bp.areaHa[b];
-        s.fuelKgPerHa[b] = Math.max(0, s.fuelKgPerHa[b] - grassKgPerHa);
-        s.browsePressure[b] += eaten * share[row + 2 * b + 1] / bp.areaHa[b];
-        if (h == e) {
-          s.elephantsPerKm2[b] = s.abundance[h] * (share[row + 2 * b] + share[row + 2 * b + 1])
-              / bp.areaKm2[b];
+        double reach = s.reach[h * blocks + b];
+        for (int c = 0; c < CATEGORIES_PER_BLOCK; c++) {
+          int k = CATEGORIES_PER_BLOCK * b + c;
+          double used = share[row + k];
+          if (used == 0) {
+            continue;
+          }
+          double competing = 0;
+          for (int o = 0; o < herbivores; o++) {
+            double other = share[o * categories + k];
+            if (other == 0 || s.abundance[o] == 0) {
+              continue;
+            }
+            double otherReach = s.reach[o * blocks + b];
+            competing += s.abundance[o] * hp.intakeKgPerYear[o] * other
+                * Math.min(1, reach / otherReach);
+          }
+          double depletion = competing / (supply[k] * reach);
+          index += used * depletion;
+          double got = used * Math.min(1, 1 / depletion);
+          satisfied += got;
+          if (demand > 0) {
+            double eatenKg = demand * got;
+            if (c < LOW_BROWSE) {
+              s.grazedFraction[b] += eatenKg / bp.areaHa[b];
+            } else if (c == LOW_BROWSE) {
+              s.browsePressure[b] += eatenKg / bp.areaHa[b];
+            }
+            if (h == e) {
+              s.elephantsPerKm2[b] += s.abundance[h] * used / bp.areaKm2[b];
+            }
+          }
         }
       }
+      s.pressureKg[h] = index * s.forageKg[h];
+      s.satisfaction[h] = satisfied;
     }
     for (int b = 0; b < blocks; b++) {
-      double available = s.browseAllKgPerHa[b];
+      double eatenKgPerHa = Math.min(s.grazedFraction[b], s.fuelKgPerHa[b]);
+      s.fuelKgPerHa[b] -= eatenKgPerHa;
+      double production = s.grassProductionKgPerHa[b];
+      s.grazedFraction[b] = production > 0 ? Math.min(1, eatenKgPerHa / production) : 0;
+      double available = s.lowBrowseKgPerHa[b];
       s.browsePressure[b] = available > 0 ? Math.min(1, s.browsePressure[b] / available) : 0;
     }
   }

@@ -48,6 +48,26 @@ public final class ParametersFromScenario {
   /** Years from the start of contraception to fewer births (gestation about 22 months). */
   static final int GESTATION_LAG_YEARS = 2;
 
+  /**
+   * Share of tall grass, short grass, low browse (below 2 m) and high browse each feeding role
+   * accepts, in GuildRole order. Our calibration after the qualitative literature: bulk grazers
+   * need a sward they can bite in bulk and take short grass less; selective grazers need tall
+   * grass of particular species and condition, a small part of the tall grass (roan and sable
+   * avoid short, heavily grazed swards, Harrington et al. 1999, from memory); small mixed feeders crop short grass and low shrubs (small animals subsist on
+   * shorter swards, Illius &amp; Gordon 1987); browsers take low and some high browse.
+   */
+  static final double[][] ACCEPTANCE = {
+      {1.0, 0.4, 1.0, 0.1}, // bulk grazer
+      {0.15, 0.0, 1.0, 0.1}, // selective grazer
+      {0.2, 0.2, 1.0, 0.3}, // browser
+      {0.1, 1.0, 1.0, 0.1}, // mixed feeder
+  };
+  /**
+   * Elephants pull up tall grass more easily than they crop short grass, and feed mostly above
+   * the reach of other browsers (our calibration; Owen-Smith 1988, from memory).
+   */
+  static final double[] ELEPHANT_ACCEPTANCE = {1.0, 0.2, 0.2, 1.0};
+
   private ParametersFromScenario() {}
 
   /** Model parameters for a scenario. */
@@ -108,6 +128,7 @@ public final class ParametersFromScenario {
     double[] initial = new double[n];
     double[] threshold = new double[n];
     int[] role = new int[n];
+    double[] acceptance = new double[n * Herbivory.CATEGORIES_PER_BLOCK];
     for (int h = 0; h < guilds.size(); h++) {
       Guild g = guilds.get(h);
       names[h] = g.name();
@@ -121,6 +142,8 @@ public final class ParametersFromScenario {
       initial[h] = g.initialAbundance();
       threshold[h] = g.quasiExtinctionAbundance();
       role[h] = g.role().ordinal();
+      System.arraycopy(ACCEPTANCE[role[h]], 0, acceptance, h * Herbivory.CATEGORIES_PER_BLOCK,
+          Herbivory.CATEGORIES_PER_BLOCK);
     }
     int e = n - 1;
     var el = sc.elephants();
@@ -134,12 +157,14 @@ public final class ParametersFromScenario {
     initial[e] = el.initialAbundance();
     threshold[e] = el.quasiExtinctionAbundance();
     role[e] = -1;
+    System.arraycopy(ELEPHANT_ACCEPTANCE, 0, acceptance, e * Herbivory.CATEGORIES_PER_BLOCK,
+        Herbivory.CATEGORIES_PER_BLOCK);
     for (int h = 0; h < n; h++) {
       intake[h] = 365 * Metabolism.dryMatterIntakeKgPerDay(mass[h], FIELD_METABOLIC_MULTIPLE,
           FORAGE_ENERGY_MJ_PER_KG);
     }
     return new HerbivoreParameters(names, mass, intake, grassDiet, reach, rate, noise, initial,
-        threshold, role);
+        threshold, role, acceptance);
   }
 
   private static PredatorParameters predators(Scenario sc) {

@@ -8,15 +8,16 @@ package veldplan.model;
  * bounds of Asner &amp; Levick (2012) for elephant damage. Basal area per tree comes from stem
  * diameters of 1, 3, 8, 18 and 35 cm and browse production per tree from leaf masses of that
  * order (our calibration, from memory of savanna allometry). Growth and mortality rates are our
- * calibration: residence of about 2, 4, 8 and 16 years in the four lower classes under good
- * conditions and no disturbance, mortality falling with size.
+ * calibration: residence of about 2.5, 7, 14 and 33 years in the four lower classes under good
+ * conditions and no disturbance (height growth of roughly 0.2–0.6 m/yr), mortality falling
+ * with size.
  */
 public final class TreeParameters {
   final double[] heightM = new double[TreeClass.COUNT];
   final double[] lnHeight = new double[TreeClass.COUNT];
   final double[] basalAreaM2PerTree;
   final double[] browseKgPerTreePerYear;
-  final double[] browseReachFraction;
+  final double[] lowBrowseShare;
   final double[] transitionPerYear;
   final double[] mortalityPerYear;
   final double[] elephantBreakageKm2PerElephant;
@@ -34,8 +35,8 @@ public final class TreeParameters {
   /**
    * @param basalAreaM2PerTree stem basal area of one tree per class (m2)
    * @param browseKgPerTreePerYear leaf and shoot production per tree per class (kg DM/yr)
-   * @param browseReachFraction share of each class's browse within reach of browsers other than
-   *     elephants (elephants reach all of it)
+   * @param lowBrowseShare share of each class's leaf below 2 m (low browse); the rest is high
+   *     browse, which mainly elephants and the tallest browsers use
    * @param transitionPerYear share of a class growing into the next per year at growth index 1
    *     and no competition; length COUNT - 1
    * @param mortalityPerYear background death per class (fraction/yr)
@@ -55,14 +56,14 @@ public final class TreeParameters {
    * @param referenceAetMm annual actual evapotranspiration at which the growth index is 1 (mm)
    */
   public TreeParameters(double[] basalAreaM2PerTree, double[] browseKgPerTreePerYear,
-      double[] browseReachFraction, double[] transitionPerYear, double[] mortalityPerYear,
+      double[] lowBrowseShare, double[] transitionPerYear, double[] mortalityPerYear,
       double[] elephantBreakageKm2PerElephant, double recruitsPerLargeTreePerYear,
       double seedRainPerHaPerYear, double maxBasalAreaM2PerHaPerMmAet, double c3TminC,
       double c3ToptC, double c3TmaxC, double co2ReferencePpm, double co2HalfSaturationPpm,
       double browsingGrowthLoss, double referenceAetMm) {
     this.basalAreaM2PerTree = perClass(basalAreaM2PerTree, "basalAreaM2PerTree");
     this.browseKgPerTreePerYear = perClass(browseKgPerTreePerYear, "browseKgPerTreePerYear");
-    this.browseReachFraction = perClass(browseReachFraction, "browseReachFraction");
+    this.lowBrowseShare = perClass(lowBrowseShare, "lowBrowseShare");
     if (transitionPerYear.length != TreeClass.COUNT - 1) {
       throw new IllegalArgumentException("transitionPerYear needs " + (TreeClass.COUNT - 1)
           + " values, got " + transitionPerYear.length);
@@ -110,9 +111,9 @@ public final class TreeParameters {
     return new TreeParameters(
         new double[] {0.0000785, 0.000707, 0.00503, 0.0254, 0.0962},
         new double[] {0.05, 0.4, 2.5, 10, 25},
-        new double[] {1, 1, 1, 0.5, 0.1},
-        new double[] {0.5, 0.25, 0.12, 0.06},
-        new double[] {0.10, 0.04, 0.02, 0.01, 0.015},
+        new double[] {1, 1, 0.3, 0.05, 0},
+        new double[] {0.4, 0.15, 0.07, 0.03},
+        new double[] {0.12, 0.05, 0.025, 0.012, 0.015},
         new double[] {0, 0.01, 0.04, 0.16, 0.04},
         0.6, 1.0, 0.035, 5, 27, 40, 400, 200, 0.5, 450);
   }

@@ -76,7 +76,7 @@ final class Trees {
         int resproutClass = Math.min(k, TreeClass.FIRE_TRAP_0_5_TO_2M.ordinal());
         next[resproutClass] += resprouts;
         if (k < TreeClass.COUNT - 1) {
-          double browsed = t.browseReachFraction[k] >= 1 ? t.browsingGrowthLoss * browse : 0;
+          double browsed = t.browsingGrowthLoss * browse * t.lowBrowseShare[k];
           double moving = n * Math.min(MAX_TRANSITION,
               t.transitionPerYear[k] * growth * (1 - browsed));
           next[k] += n - moving;

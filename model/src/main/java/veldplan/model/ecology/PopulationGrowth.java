@@ -30,7 +30,8 @@ public final class PopulationGrowth {
    * @param r  exponential rate r (per year), finite
    * @param t  time since N0 t (years), &ge; 0 (backwards in time the solution from N0 &gt; K
    *           diverges, so negative times are refused)
-   * @return N(t) (unit of N0), &ge; 0
+   * @return N(t) (unit of N0), &ge; 0; {@link Double#POSITIVE_INFINITY} once the solution has
+   *     diverged, which happens only for r &lt; 0 with N0 &gt; K (K is then unstable)
    * @throws IllegalArgumentException if an argument is out of range
    */
   public static double logisticClosedForm(double n0, double k, double r, double t) {
@@ -41,7 +42,11 @@ public final class PopulationGrowth {
     if (n0 == 0 || n0 == k) {
       return n0;
     }
-    return k * n0 / (n0 + (k - n0) * Math.exp(-r * t));
+    double denominator = n0 + (k - n0) * Math.exp(-r * t);
+    if (!(denominator > 0)) {
+      return Double.POSITIVE_INFINITY;
+    }
+    return k * n0 / denominator;
   }
 
   /**

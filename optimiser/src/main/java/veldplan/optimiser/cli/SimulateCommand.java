@@ -126,7 +126,7 @@ public final class SimulateCommand implements Callable<Integer> {
       loaded = new LoadedScenario(loaded.file(), sc, loaded.baseline(), loaded.pathSeries(),
           loaded.sha256());
     } catch (ScenarioException e) {
-      err.print(e.report());
+      err.println(e.report());
       err.flush();
       return ExitCodes.BAD_INPUT;
     }

@@ -1,5 +1,6 @@
 package veldplan.shared.scenario;
 
+import java.math.BigDecimal;
 import java.nio.file.Files;
 import java.nio.file.InvalidPathException;
 import java.nio.file.Path;
@@ -162,7 +163,8 @@ public final class ScenarioValidator {
       if (!(sum <= 1 + FRACTION_SUM_TOLERANCE)) {
         problems.add(where.at(Texts.child(Texts.child("/park/blocks", i), "clayFraction"),
             "sandFraction + clayFraction is " + Texts.number(block.sandFraction()) + " + "
-                + Texts.number(block.clayFraction()) + " = " + Texts.number(sum)
+                + Texts.number(block.clayFraction()) + " = " + decimalSum(block.sandFraction(),
+                block.clayFraction())
                 + " (expected sandFraction + clayFraction <= 1, mass fraction)"));
       }
     }
@@ -257,6 +259,11 @@ public final class ScenarioValidator {
             + " (expected strictly increasing anchor years)"));
       }
     }
+  }
+
+  /** {@code a + b} as decimals, so that 0.7 + 0.45 shows as 1.15, not 1.1499999999999999. */
+  private static String decimalSum(double a, double b) {
+    return BigDecimal.valueOf(a).add(BigDecimal.valueOf(b)).stripTrailingZeros().toPlainString();
   }
 
   /** Adds a problem unless {@code initial > threshold}, or both are 0. */

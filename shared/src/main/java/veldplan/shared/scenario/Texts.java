@@ -62,7 +62,8 @@ final class Texts {
   /**
    * The candidate closest to {@code input} by edit distance (optimal string alignment, ignoring
    * case), or {@code null} if none is close enough to be a likely typo: at most 2 edits, or a
-   * third of the input's length for longer names.
+   * third of the input's length for longer names. Failing that, the one candidate that starts
+   * with an input of at least 3 characters ("early" for "early-dry"), if exactly one does.
    */
   static String closest(String input, Collection<String> candidates) {
     String lower = input.toLowerCase(Locale.ROOT);
@@ -76,7 +77,21 @@ final class Texts {
         bestDistance = distance;
       }
     }
-    return bestDistance <= limit ? best : null;
+    if (bestDistance <= limit) {
+      return best;
+    }
+    String prefixed = null;
+    if (lower.length() >= 3) {
+      for (String candidate : candidates) {
+        if (candidate.toLowerCase(Locale.ROOT).startsWith(lower)) {
+          if (prefixed != null) {
+            return null;
+          }
+          prefixed = candidate;
+        }
+      }
+    }
+    return prefixed;
   }
 
   /** {@code "; did you mean \"x\"?"} for the closest candidate, or {@code ""} if none is close. */

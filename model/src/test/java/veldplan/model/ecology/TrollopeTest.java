@@ -1,0 +1,59 @@
+package veldplan.model.ecology;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
+
+/**
+ * Tests for {@link Trollope}. The coefficients come from a secondary code copy attributed to
+ * Trollope (2002) [V2, methods.md §8.2]; the values are the sheet's arithmetic from them [D],
+ * to half the last printed digit.
+ */
+class TrollopeTest {
+
+  @ParameterizedTest(name = "FL {0}, FM {1}, RH {2}, W {3} -> {4}")
+  @CsvSource({
+      // [D] methods §8.2.
+      "4000, 10, 30, 3, 4156.30",
+      "3000, 30, 40, 2, 1828.15"})
+  void fireIntensity_sheetCases_matchHandArithmetic(double fuel, double moisture,
+      double humidity, double wind, double expected) {
+    assertEquals(expected, Trollope.fireIntensityKwPerM(fuel, moisture, humidity, wind), 0.005);
+  }
+
+  @Test
+  void fireIntensity_lightWetFuel_isFlooredAtZero() {
+    // [D] 2729 + 0 - 530 x 10 - 0.1907 x 8100 - 596/0.5 < 0; floored at 0 (methods §8.2).
+    assertEquals(0, Trollope.fireIntensityKwPerM(0, 100, 90, 0.5), 0);
+  }
+
+  @Test
+  void fireIntensity_calmAir_usesHalfMetrePerSecond() {
+    // methods §8.2: keep W >= 0.5 m/s because the 1/W term diverges.
+    double atFloor = Trollope.fireIntensityKwPerM(4000, 10, 30, 0.5);
+    assertEquals(atFloor, Trollope.fireIntensityKwPerM(4000, 10, 30, 0), 0);
+    assertEquals(atFloor, Trollope.fireIntensityKwPerM(4000, 10, 30, 0.2), 0);
+  }
+
+  @Test
+  void fireIntensity_eachTerm_pushesInItsDirection() {
+    // [D] signs of the regression terms: more fuel and wind raise FI; moisture and RH lower it.
+    double base = Trollope.fireIntensityKwPerM(4000, 20, 40, 2);
+    assertTrue(Trollope.fireIntensityKwPerM(5000, 20, 40, 2) > base);
+    assertTrue(Trollope.fireIntensityKwPerM(4000, 20, 40, 4) > base);
+    assertTrue(Trollope.fireIntensityKwPerM(4000, 30, 40, 2) < base);
+    assertTrue(Trollope.fireIntensityKwPerM(4000, 20, 60, 2) < base);
+  }
+
+  @Test
+  void fireIntensity_humidityAbove100_throws() {
+    assertThrows(IllegalArgumentException.class,
+        () -> Trollope.fireIntensityKwPerM(4000, 10, 101, 3));
+    assertThrows(IllegalArgumentException.class,
+        () -> Trollope.fireIntensityKwPerM(Double.NaN, 10, 30, 3));
+  }
+}
