@@ -29,19 +29,35 @@ package veldplan.model;
  * derived from the replicate seed, so every policy meets the same random numbers.
  */
 final class AnnualCycle {
+  /** Names of the processes in the order they run; {@link #step} runs one by index. */
+  static final String[] PROCESSES = {
+      "Management.startOfYear", "Grass.grow", "Herbivory.forageAndGraze", "Fire.burn",
+      "Trees.update", "Animals.hunt", "Animals.breedAndDie", "Management.endOfYear"};
+
   private AnnualCycle() {}
 
   static void advance(ModelParameters p, ManagementPlan plan, Forcing f, int year,
       EcosystemState s) {
     s.year = year;
-    Management.startOfYear(p, plan, year, s);
-    Grass.grow(p.grass(), p.trees(), f, year, s);
-    Herbivory.forageAndGraze(p, s);
-    Fire.burn(p.fire(), plan, f, year, s);
-    Trees.update(p, f, year, s);
-    Animals.hunt(p, s);
-    Animals.breedAndDie(p, f, year, s);
-    Management.endOfYear(p, plan, year, s);
+    for (int process = 0; process < PROCESSES.length; process++) {
+      step(process, p, plan, f, year, s);
+    }
     assert s.violation() == null : s.violation() + " after year " + year;
+  }
+
+  /** Runs process number {@code process} of the year (tests check invariants between steps). */
+  static void step(int process, ModelParameters p, ManagementPlan plan, Forcing f, int year,
+      EcosystemState s) {
+    switch (process) {
+      case 0 -> Management.startOfYear(p, plan, year, s);
+      case 1 -> Grass.grow(p.grass(), p.trees(), f, year, s);
+      case 2 -> Herbivory.forageAndGraze(p, s);
+      case 3 -> Fire.burn(p.fire(), plan, f, year, s);
+      case 4 -> Trees.update(p, f, year, s);
+      case 5 -> Animals.hunt(p, s);
+      case 6 -> Animals.breedAndDie(p, f, year, s);
+      case 7 -> Management.endOfYear(p, plan, year, s);
+      default -> throw new IllegalArgumentException("no process " + process);
+    }
   }
 }

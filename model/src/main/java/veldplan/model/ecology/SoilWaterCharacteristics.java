@@ -2,7 +2,9 @@ package veldplan.model.ecology;
 
 /**
  * Soil water characteristics of one soil, as estimated by {@link SaxtonRawls#of}. Volumetric water
- * contents are in m³ of water per m³ of soil.
+ * contents are in m³ of water per m³ of soil. The constructor throws
+ * {@link IllegalArgumentException} unless 0 &lt; θ1500 &lt; θ33 &lt; θS &lt; 1 and the other values
+ * are positive and finite.
  *
  * @param wiltingPoint                   water content at 1500 kPa, θ1500 (m³/m³), in (0, 1)
  * @param fieldCapacity                  water content at 33 kPa, θ33 (m³/m³), above the wilting
@@ -19,10 +21,16 @@ public record SoilWaterCharacteristics(double wiltingPoint, double fieldCapacity
     double bulkDensityGPerCm3) {
 
   /**
-   * Checks that the water contents are ordered 0 &lt; θ1500 &lt; θ33 &lt; θS &lt; 1 and that the
-   * other values are positive and finite.
+   * Checks the values.
    *
-   * @throws IllegalArgumentException if a value is out of range
+   * @param wiltingPoint                   θ1500 (m³/m³)
+   * @param fieldCapacity                  θ33 (m³/m³)
+   * @param saturation                     θS (m³/m³)
+   * @param availableWater                 θ33 − θ1500 (m³/m³)
+   * @param saturatedConductivityMmPerHour Ks (mm/h)
+   * @param bulkDensityGPerCm3             ρN (g/cm³)
+   * @throws IllegalArgumentException unless 0 &lt; θ1500 &lt; θ33 &lt; θS &lt; 1 and the other
+   *     values are positive and finite
    */
   public SoilWaterCharacteristics {
     Arguments.inClosedRange(wiltingPoint, Double.MIN_VALUE, 1, "wiltingPoint");

@@ -28,7 +28,8 @@ package veldplan.model.ecology;
  */
 public final class Topkill {
   /**
-   * Coefficients of one site's topkill regression [1, Table C2].
+   * Coefficients of one site's topkill regression [1, Table C2]. The constructor throws
+   * {@link IllegalArgumentException} if a coefficient is not finite.
    *
    * @param intercept                the intercept of the logit (dimensionless), finite
    * @param lnHeightCoefficient      a, the coefficient of ln(height in m), finite
@@ -38,8 +39,11 @@ public final class Topkill {
   public record Coefficients(double intercept, double lnHeightCoefficient,
       double sqrtIntensityCoefficient) {
     /**
-     * Checks that every coefficient is finite.
+     * Checks the coefficients.
      *
+     * @param intercept                intercept of the logit
+     * @param lnHeightCoefficient      a, coefficient of ln(height in m)
+     * @param sqrtIntensityCoefficient b, coefficient of √(intensity in kW/m)
      * @throws IllegalArgumentException if a coefficient is not finite
      */
     public Coefficients {
