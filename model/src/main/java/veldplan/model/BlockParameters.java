@@ -10,8 +10,8 @@ public final class BlockParameters {
   final double[] areaKm2;
   /** Plant-available water capacity of the root zone (mm): AW (Saxton &amp; Rawls 2006) x depth. */
   final double[] bucketCapacityMm;
-  /** Water lost from the surface layer per month before it reaches the roots (mm/month). */
-  final double[] surfaceEvaporationCapMm;
+  /** Readily evaporable water of the surface layer, 0.4 x TEW of FAO-56 Eq. 73 (mm). */
+  final double[] evaporableWaterMm;
   final double[] altitudeM;
   final double[] latitudeDeg;
   final double[] rainfallMultiplier;
@@ -22,7 +22,7 @@ public final class BlockParameters {
   final double[] initialTreesPerHa;
 
   BlockParameters(String[] names, double[] areaHa, double[] bucketCapacityMm,
-      double[] surfaceEvaporationCapMm, double[] altitudeM, double[] latitudeDeg,
+      double[] evaporableWaterMm, double[] altitudeM, double[] latitudeDeg,
       double[] rainfallMultiplier, int[] artificialWaterPoints, double[] perennialRiverKm,
       double[] initialGrassKgPerHa, double[] initialTreesPerHa) {
     this.count = names.length;
@@ -33,7 +33,7 @@ public final class BlockParameters {
       areaKm2[b] = areaHa[b] / 100.0;
     }
     this.bucketCapacityMm = bucketCapacityMm.clone();
-    this.surfaceEvaporationCapMm = surfaceEvaporationCapMm.clone();
+    this.evaporableWaterMm = evaporableWaterMm.clone();
     this.altitudeM = altitudeM.clone();
     this.latitudeDeg = latitudeDeg.clone();
     this.rainfallMultiplier = rainfallMultiplier.clone();

@@ -5,6 +5,9 @@ package veldplan.model;
  * the last index ({@link #elephant}). Arrays are indexed by herbivore.
  */
 public final class HerbivoreParameters {
+  /** Mass of the reference large stock unit (kg), Meissner (1982), methods sheet §9.2. */
+  static final double LARGE_STOCK_UNIT_KG = 450;
+
   /** Number of herbivores including elephants. */
   final int count;
   /** Index of the elephants (the last one). */
@@ -28,6 +31,8 @@ public final class HerbivoreParameters {
    * the order tall grass, short grass, low browse, high browse ({@link Herbivory}).
    */
   final double[] acceptance;
+  /** Supply multiplier from coarse forage only large herbivores use: max(1, (W/450)^0.25). */
+  final double[] coarseForageFactor;
 
   HerbivoreParameters(String[] names, double[] bodyMassKg, double[] intakeKgPerYear,
       double[] grassDietFraction, double[] reachKm, double[] maxGrowthRatePerYear,
@@ -50,6 +55,10 @@ public final class HerbivoreParameters {
           + " values per herbivore");
     }
     this.acceptance = acceptance.clone();
+    this.coarseForageFactor = new double[count];
+    for (int h = 0; h < count; h++) {
+      coarseForageFactor[h] = Math.max(1, Math.pow(bodyMassKg[h] / LARGE_STOCK_UNIT_KG, 0.25));
+    }
   }
 
   /** Number of herbivores including elephants. */

@@ -23,6 +23,12 @@ import veldplan.model.ecology.WaterCoverage;
  * grass with a fixed preference (Chesson-type selection), so they shift to grass when browse gets
  * scarce.
  *
+ * <h2>Coarse forage</h2>
+ * Gut capacity scales with body mass while needs scale with mass^0.75, so large herbivores can
+ * live on coarser forage (the Jarman–Bell principle; Demment &amp; Van Soest 1985; methods sheet
+ * §9.2). A herbivore heavier than a 450 kg large stock unit sees the supply of every category
+ * enlarged by (W / 450)^0.25: the stems, bark and coarse grass others leave.
+ *
  * <h2>Sharing</h2>
  * Resources are (block, tall grass|short grass|low browse|high browse) categories. Each
  * herbivore spreads its demand (head x intake) over the categories in proportion to what it can
@@ -175,7 +181,7 @@ final class Herbivory {
             competing += s.abundance[o] * hp.intakeKgPerYear[o] * other
                 * Math.min(1, reach / otherReach);
           }
-          double depletion = competing / (supply[k] * reach);
+          double depletion = competing / (supply[k] * reach * hp.coarseForageFactor[h]);
           index += used * depletion;
           double got = used * Math.min(1, 1 / depletion);
           satisfied += got;

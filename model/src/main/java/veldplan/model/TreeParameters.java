@@ -110,11 +110,11 @@ public final class TreeParameters {
   public static TreeParameters defaults() {
     return new TreeParameters(
         new double[] {0.0000785, 0.000707, 0.00503, 0.0254, 0.0962},
-        new double[] {0.05, 0.4, 2.5, 10, 25},
+        new double[] {0.05, 0.5, 4, 20, 50},
         new double[] {1, 1, 0.3, 0.05, 0},
         new double[] {0.4, 0.15, 0.07, 0.03},
         new double[] {0.12, 0.05, 0.025, 0.012, 0.015},
-        new double[] {0, 0.01, 0.04, 0.16, 0.04},
+        new double[] {0, 0.02, 0.1, 0.2, 0.12},
         0.6, 1.0, 0.035, 5, 27, 40, 400, 200, 0.5, 450);
   }
 

@@ -37,6 +37,8 @@ final class TestParks {
       0.15, 0.18};
 
   double rainfallMm = 600;
+  /** Share of annual rainfall per month, January first. */
+  double[] rainPattern = SUMMER_RAIN;
   double tmaxC = 30;
   double tminC = 15;
   /** Seasonal temperature amplitude (°C) around the means above. */
@@ -71,6 +73,15 @@ final class TestParks {
   Double triggerDensity = null;
   int openPoints = -1;
   Integer closureYear = null;
+
+  /** Rain spread evenly over {@code months} months centred on January. */
+  static double[] wetSeason(int months) {
+    double[] pattern = new double[12];
+    for (int i = 0; i < months; i++) {
+      pattern[Math.floorMod(i - months / 2, 12)] = 1.0 / months;
+    }
+    return pattern;
+  }
 
   Scenario scenario() {
     List<BurnBlock> blockList = new ArrayList<>();
@@ -116,7 +127,7 @@ final class TestParks {
       for (int m = 0; m < 12; m++) {
         // Warmest in January (southern summer), coolest in July.
         double season = seasonalAmplitudeC * Math.cos(2 * Math.PI * m / 12.0);
-        rain[y * 12 + m] = rainfallMm * SUMMER_RAIN[m];
+        rain[y * 12 + m] = rainfallMm * rainPattern[m];
         tmin[y * 12 + m] = tminC + season;
         tmax[y * 12 + m] = tmaxC + season;
       }
