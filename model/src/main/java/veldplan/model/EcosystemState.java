@@ -71,6 +71,10 @@ public final class EcosystemState {
   final double[] tallShare;
   /** Resource shares p[herbivore * categories + category], categories = blocks * 3. */
   final double[] resourceShare;
+  /** Herbivores in order of reach, shortest first, per block [block * herbivores + j]. */
+  final int[] reachOrder;
+  /** Demand per category per unit of reach [herbivore * categories + category] (kg DM). */
+  final double[] demandDensity;
   final double[] nextClasses = new double[TreeClass.COUNT];
 
   /** Allocates every array once for parameters {@code p}. */
@@ -107,6 +111,8 @@ public final class EcosystemState {
     preyBiomassKg = new double[predators];
     tallShare = new double[blocks];
     resourceShare = new double[herbivores * blocks * Herbivory.CATEGORIES_PER_BLOCK];
+    reachOrder = new int[blocks * herbivores];
+    demandDensity = new double[herbivores * blocks * Herbivory.CATEGORIES_PER_BLOCK];
   }
 
   /** Sets the state to the scenario's initial conditions. */

@@ -51,15 +51,33 @@ final class Herbivory {
 
   private Herbivory() {}
 
-  /** Recomputes every herbivore's reach for the water points open this year. */
+  /**
+   * Recomputes every herbivore's reach for the water points open this year, and the order of
+   * herbivores by reach in each block (shortest first; insertion sort, no allocation).
+   */
   static void updateReach(BlockParameters bp, HerbivoreParameters hp, EcosystemState s) {
     int blocks = s.blocks;
-    for (int h = 0; h < hp.count; h++) {
+    int herbivores = hp.count;
+    for (int h = 0; h < herbivores; h++) {
       double d = hp.reachKm[h];
       for (int b = 0; b < blocks; b++) {
         s.reach[h * blocks + b] = Double.isInfinite(d) ? 1
             : WaterCoverage.fractionWithinReach(bp.areaKm2[b], s.waterPointsOpen[b],
                 bp.perennialRiverKm[b], d);
+      }
+    }
+    int[] order = s.reachOrder;
+    for (int b = 0; b < blocks; b++) {
+      int base = b * herbivores;
+      for (int j = 0; j < herbivores; j++) {
+        int h = j;
+        double r = s.reach[h * blocks + b];
+        int at = j;
+        while (at > 0 && s.reach[order[base + at - 1] * blocks + b] > r) {
+          order[base + at] = order[base + at - 1];
+          at--;
+        }
+        order[base + at] = h;
       }
     }
   }
@@ -144,8 +162,9 @@ final class Herbivory {
       }
       s.forageKg[h] = forage;
       if (forage > 0) {
+        double inverse = 1 / forage;
         for (int c = 0; c < categories; c++) {
-          share[row + c] /= forage;
+          share[row + c] *= inverse;
         }
       }
     }
@@ -153,53 +172,77 @@ final class Herbivory {
     // Depletion each herbivore meets in each category: the demand of every herbivore on the
     // part of the block within its reach, over the supply there. Reach areas are nested (all
     // centred on the same water), and each herbivore spreads its demand evenly over its reach.
-    for (int b = 0; b < blocks; b++) {
-      s.browsePressure[b] = 0;
-      s.elephantsPerKm2[b] = 0;
-      s.grazedFraction[b] = 0;
-    }
-    for (int h = 0; h < herbivores; h++) {
-      double demand = s.abundance[h] * hp.intakeKgPerYear[h];
-      int row = h * categories;
-      double index = 0;
-      double satisfied = 0;
+    // Demand of each herbivore per category, per unit of the block share it reaches.
+    double[] density = s.demandDensity;
+    for (int o = 0; o < herbivores; o++) {
+      double demand = s.abundance[o] * hp.intakeKgPerYear[o];
+      int row = o * categories;
+      s.pressureKg[o] = 0;
+      s.satisfaction[o] = 0;
       for (int b = 0; b < blocks; b++) {
-        double reach = s.reach[h * blocks + b];
+        double reach = s.reach[o * blocks + b];
+        double perReach = reach > 0 ? demand / reach : 0;
         for (int c = 0; c < CATEGORIES_PER_BLOCK; c++) {
           int k = CATEGORIES_PER_BLOCK * b + c;
-          double used = share[row + k];
+          density[row + k] = perReach * share[row + k];
+        }
+      }
+    }
+    // The demand on the part of a block within h's reach is sum_o density_o min(r_h, r_o).
+    // Walking the herbivores in order of reach, that is (sum over shorter or equal reach of
+    // density_o r_o) + r_h (sum over longer reach of density_o): one pass per category.
+    int[] order = s.reachOrder;
+    double[] reachOf = s.reach;
+    double[] pressure = s.pressureKg;
+    double[] satisfaction = s.satisfaction;
+    double[] abundance = s.abundance;
+    double[] intake = hp.intakeKgPerYear;
+    double[] coarse = hp.coarseForageFactor;
+    for (int b = 0; b < blocks; b++) {
+      double grazed = 0;
+      double browsed = 0;
+      double elephantUse = 0;
+      for (int c = 0; c < CATEGORIES_PER_BLOCK; c++) {
+        int k = CATEGORIES_PER_BLOCK * b + c;
+        double farther = 0;
+        for (int o = 0; o < herbivores; o++) {
+          farther += density[o * categories + k];
+        }
+        double nearer = 0;
+        double supplyK = supply[k];
+        for (int j = 0; j < herbivores; j++) {
+          int h = order[b * herbivores + j];
+          double reach = reachOf[h * blocks + b];
+          double d = density[h * categories + k];
+          nearer += d * reach;
+          farther -= d;
+          double used = share[h * categories + k];
           if (used == 0) {
             continue;
           }
-          double competing = 0;
-          for (int o = 0; o < herbivores; o++) {
-            double other = share[o * categories + k];
-            if (other == 0 || s.abundance[o] == 0) {
-              continue;
-            }
-            double otherReach = s.reach[o * blocks + b];
-            competing += s.abundance[o] * hp.intakeKgPerYear[o] * other
-                * Math.min(1, reach / otherReach);
+          double available = supplyK * reach * coarse[h];
+          double competing = nearer + reach * farther;
+          pressure[h] += used * competing / available;
+          // Share of its demand met here: all of it unless the category is over-used.
+          double got = competing > available ? used * available / competing : used;
+          satisfaction[h] += got;
+          double eatenKg = abundance[h] * intake[h] * got;
+          if (c < LOW_BROWSE) {
+            grazed += eatenKg;
+          } else if (c == LOW_BROWSE) {
+            browsed += eatenKg;
           }
-          double depletion = competing / (supply[k] * reach * hp.coarseForageFactor[h]);
-          index += used * depletion;
-          double got = used * Math.min(1, 1 / depletion);
-          satisfied += got;
-          if (demand > 0) {
-            double eatenKg = demand * got;
-            if (c < LOW_BROWSE) {
-              s.grazedFraction[b] += eatenKg / bp.areaHa[b];
-            } else if (c == LOW_BROWSE) {
-              s.browsePressure[b] += eatenKg / bp.areaHa[b];
-            }
-            if (h == e) {
-              s.elephantsPerKm2[b] += s.abundance[h] * used / bp.areaKm2[b];
-            }
+          if (h == e) {
+            elephantUse += used;
           }
         }
       }
-      s.pressureKg[h] = index * s.forageKg[h];
-      s.satisfaction[h] = satisfied;
+      s.grazedFraction[b] = grazed / bp.areaHa[b];
+      s.browsePressure[b] = browsed / bp.areaHa[b];
+      s.elephantsPerKm2[b] = abundance[e] * elephantUse / bp.areaKm2[b];
+    }
+    for (int h = 0; h < herbivores; h++) {
+      s.pressureKg[h] *= s.forageKg[h];
     }
     for (int b = 0; b < blocks; b++) {
       double eatenKgPerHa = Math.min(s.grazedFraction[b], s.fuelKgPerHa[b]);

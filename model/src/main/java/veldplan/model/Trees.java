@@ -50,6 +50,8 @@ final class Trees {
       double reach = s.reach[e * blocks + b];
       double elephantsInReach = reach > 0 ? s.elephantsPerKm2[b] / reach : 0;
       double browse = s.browsePressure[b];
+      double sqrtPlanned = Math.sqrt(s.plannedIntensityKwPerM[b]);
+      double sqrtWild = Math.sqrt(s.wildIntensityKwPerM[b]);
       for (int k = 0; k < TreeClass.COUNT; k++) {
         next[k] = 0;
       }
@@ -57,11 +59,11 @@ final class Trees {
         double n = s.treesPerHa[base + k] * (1 - Math.min(1, t.mortalityPerYear[k] + thinning));
         double topkill = 0;
         if (planned > 0) {
-          topkill += planned * Topkill.probability(t.heightM[k], s.plannedIntensityKwPerM[b],
+          topkill += planned * Topkill.probabilityOfTerms(t.lnHeight[k], sqrtPlanned,
               fp.topkillIntercept(), fp.topkillLnHeight(), fp.topkillSqrtIntensity());
         }
         if (wild > 0) {
-          topkill += wild * Topkill.probability(t.heightM[k], s.wildIntensityKwPerM[b],
+          topkill += wild * Topkill.probabilityOfTerms(t.lnHeight[k], sqrtWild,
               fp.topkillIntercept(), fp.topkillLnHeight(), fp.topkillSqrtIntensity());
         }
         double topkilled = n * topkill;

@@ -85,8 +85,21 @@ public final class Topkill {
       double lnHeightCoefficient, double sqrtIntensityCoefficient) {
     Arguments.positive(heightM, "heightM");
     Arguments.nonNegative(intensityKwPerM, "intensityKwPerM");
-    double logit = intercept + lnHeightCoefficient * Math.log(heightM)
-        + sqrtIntensityCoefficient * Math.sqrt(intensityKwPerM);
+    return probabilityOfTerms(Math.log(heightM), Math.sqrt(intensityKwPerM), intercept,
+        lnHeightCoefficient, sqrtIntensityCoefficient);
+  }
+
+  /**
+   * The same logistic from its two predictors already transformed, for callers that evaluate many
+   * heights at one intensity: logit = intercept + a ln(H) + b sqrt(I). No argument checks.
+   *
+   * @param lnHeight      ln(height in m)
+   * @param sqrtIntensity sqrt(fireline intensity in kW/m)
+   */
+  public static double probabilityOfTerms(double lnHeight, double sqrtIntensity,
+      double intercept, double lnHeightCoefficient, double sqrtIntensityCoefficient) {
+    double logit = intercept + lnHeightCoefficient * lnHeight
+        + sqrtIntensityCoefficient * sqrtIntensity;
     return 1 / (1 + Math.exp(-logit));
   }
 
