@@ -30,7 +30,8 @@ import veldplan.shared.rng.CounterRandom;
  *
  * <h2>Random numbers</h2>
  * One standard normal per herbivore (index h) and predator (index herbivores + p) and year from
- * the demography stream, by inversion of one uniform, drawn whether used or not.
+ * the demography stream, by inversion of one uniform, drawn whether used or not;
+ * {@link ForcingBuilder} draws them once per replicate into the {@link Forcing}.
  *
  * <p>Fewer than one animal is none: abundance below 1 is set to 0.
  */
@@ -92,9 +93,10 @@ final class Animals {
     ElephantParameters ep = p.elephants();
     int herbivores = hp.count;
     int e = hp.elephant;
-    long key = f.demographyKey;
+    double[] noiseDraws = f.demographicNoise;
+    int noiseRow = year * f.noiseSlots;
     for (int h = 0; h < herbivores; h++) {
-      double noise = hp.noiseSd[h] * standardNormal(key, year, h);
+      double noise = hp.noiseSd[h] * noiseDraws[noiseRow + h];
       double n = s.abundance[h];
       if (n == 0) {
         continue;
@@ -116,7 +118,7 @@ final class Animals {
       s.abundance[h] = n < 1 ? 0 : n;
     }
     for (int q = 0; q < pp.count; q++) {
-      double noise = pp.noiseSd[q] * standardNormal(key, year, herbivores + q);
+      double noise = pp.noiseSd[q] * noiseDraws[noiseRow + herbivores + q];
       double n = s.predatorAbundance[q];
       if (n == 0) {
         continue;

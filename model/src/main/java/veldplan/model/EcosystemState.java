@@ -71,6 +71,8 @@ public final class EcosystemState {
   final double[] tallShare;
   /** Resource shares p[herbivore * categories + category], categories = blocks * 3. */
   final double[] resourceShare;
+  /** 1 / (reach x coarse-forage factor) [herbivore * blocks + block]; 0 where out of reach. */
+  final double[] inverseReachCoarse;
   /** Herbivores in order of reach, shortest first, per block [block * herbivores + j]. */
   final int[] reachOrder;
   /** Demand per category per unit of reach [herbivore * categories + category] (kg DM). */
@@ -112,6 +114,7 @@ public final class EcosystemState {
     tallShare = new double[blocks];
     resourceShare = new double[herbivores * blocks * Herbivory.CATEGORIES_PER_BLOCK];
     reachOrder = new int[blocks * herbivores];
+    inverseReachCoarse = new double[blocks * herbivores];
     demandDensity = new double[herbivores * blocks * Herbivory.CATEGORIES_PER_BLOCK];
   }
 

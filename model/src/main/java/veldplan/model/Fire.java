@@ -1,6 +1,5 @@
 package veldplan.model;
 
-import veldplan.shared.rng.CounterRandom;
 
 /**
  * Planned burns and unplanned fires on the fuel left after grazing.
@@ -28,7 +27,8 @@ import veldplan.shared.rng.CounterRandom;
  *
  * <h2>Random numbers</h2>
  * Two draws per block and year from the fire stream (ignition, extent), indices block * 4 and
- * block * 4 + 1, drawn whether or not they are used.
+ * block * 4 + 1, drawn whether or not they are used; {@link ForcingBuilder} draws them once
+ * per replicate into the {@link Forcing}.
  */
 final class Fire {
   /** Fuel-load coefficient of Trollope's regression (kW/m per kg/ha), methods sheet §8.2. */
@@ -53,10 +53,9 @@ final class Fire {
         // A fire whose Trollope intensity is not positive does not carry.
         planned = plannedIntensity > 0 ? plan.targetFractionBurnt[b] * spread : 0;
       }
-      double rate = fp.wildfireIgnitionsPerYear() * spread
-          * curedSeasonFactor(fp, f.growingDays[at]);
-      double ignition = CounterRandom.uniform(f.fireKey, year, b * 4);
-      double extent = CounterRandom.uniform(f.fireKey, year, b * 4 + 1);
+      double rate = fp.wildfireIgnitionsPerYear() * spread * f.curedSeasonFactor[at];
+      double ignition = f.ignitionDraw[at];
+      double extent = f.extentDraw[at];
       double wildIntensity = Math.max(0, f.fireOffsetLateKwPerM[at] + fuelTerm);
       double wild = 0;
       if (ignition < 1 - Math.exp(-rate) && wildIntensity > 0) {

@@ -5,6 +5,9 @@ package veldplan.model;
  * policy, computed once and shared read-only by every policy evaluated on it (common random
  * numbers). Arrays are indexed [year * blocks + block].
  *
+ * <p>The random draws of the fire and demography streams are here too: they are a function of
+ * the replicate's keys, the year and an index only, so they are the same for every policy.
+ *
  * <p>The soil water balance does not depend on the vegetation in this model (the trees and grass
  * divide the transpired water between them; they do not change how much is transpired), so the
  * whole monthly water balance is done here and the yearly loop only reads its results.
@@ -24,8 +27,19 @@ public final class Forcing {
   final double[] fireOffsetEarlyKwPerM;
   final double[] fireOffsetLateKwPerM;
   final double[] co2Ppm;
+  /** Chance-of-unplanned-fire factor from the length of the dry season (0..1). */
+  final double[] curedSeasonFactor;
+  /** Uniform draw deciding an unplanned ignition (fire stream, index block * 4). */
+  final double[] ignitionDraw;
+  /** Uniform draw setting an unplanned fire's extent (fire stream, index block * 4 + 1). */
+  final double[] extentDraw;
+  /** Animals with a noise draw per year: herbivores, then predators. */
+  final int noiseSlots;
+  /** Standard normal draws [year * noiseSlots + slot] (demography stream, index = slot). */
+  final double[] demographicNoise;
 
-  Forcing(int years, int blocks, long fireKey, long demographyKey, double[] co2Ppm) {
+  Forcing(int years, int blocks, int noiseSlots, long fireKey, long demographyKey,
+      double[] co2Ppm) {
     this.years = years;
     this.blocks = blocks;
     this.fireKey = fireKey;
@@ -41,6 +55,11 @@ public final class Forcing {
     this.fireOffsetEarlyKwPerM = new double[n];
     this.fireOffsetLateKwPerM = new double[n];
     this.co2Ppm = co2Ppm.clone();
+    this.curedSeasonFactor = new double[n];
+    this.ignitionDraw = new double[n];
+    this.extentDraw = new double[n];
+    this.noiseSlots = noiseSlots;
+    this.demographicNoise = new double[years * noiseSlots];
   }
 
   /** Number of years. */

@@ -7,6 +7,7 @@ import veldplan.model.ecology.GrowingPeriod;
 import veldplan.model.ecology.Linacre;
 import veldplan.model.ecology.ThornthwaiteMather;
 import veldplan.model.ecology.YanHunt;
+import veldplan.shared.rng.CounterRandom;
 
 /**
  * Computes a replicate's {@link Forcing}: the monthly water balance of every block and what the
@@ -148,7 +149,18 @@ public final class ForcingBuilder {
     for (int y = 0; y < years; y++) {
       co2[y] = weather.co2Ppm(y);
     }
-    Forcing out = new Forcing(years, blocks, fireKey, demographyKey, co2);
+    int noiseSlots = p.herbivores().count + p.predators().count;
+    Forcing out = new Forcing(years, blocks, noiseSlots, fireKey, demographyKey, co2);
+    for (int y = 0; y < years; y++) {
+      for (int slot = 0; slot < noiseSlots; slot++) {
+        out.demographicNoise[y * noiseSlots + slot] =
+            Animals.standardNormal(demographyKey, y, slot);
+      }
+      for (int b = 0; b < blocks; b++) {
+        out.ignitionDraw[y * blocks + b] = CounterRandom.uniform(fireKey, y, b * 4);
+        out.extentDraw[y * blocks + b] = CounterRandom.uniform(fireKey, y, b * 4 + 1);
+      }
+    }
     double[] rain = new double[12];
     double[] pet = new double[12];
     double[] meanT = new double[12];
@@ -231,6 +243,7 @@ public final class ForcingBuilder {
         out.aetMm[at] = aet;
         out.growingDays[at] = GrowingPeriod.lengthOfGrowingPeriodDays(rain, pet,
             LGP_RESERVE_CAP_MM);
+        out.curedSeasonFactor[at] = Fire.curedSeasonFactor(f, out.growingDays[at]);
         out.grassPotentialKgPerHa[at] = grassWater * g.waterUseEfficiencyKgPerHaPerMm() * c4;
         out.treeGrowthIndex[at] = treeWater * c3 / t.referenceAetMm;
         out.fireOffsetEarlyKwPerM[at] = fireOffset(weather, y, fireSeasons[0], bp.altitudeM[b],

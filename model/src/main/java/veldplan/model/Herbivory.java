@@ -66,6 +66,13 @@ final class Herbivory {
                 bp.perennialRiverKm[b], d);
       }
     }
+    for (int h = 0; h < herbivores; h++) {
+      for (int b = 0; b < blocks; b++) {
+        double reach = s.reach[h * blocks + b];
+        s.inverseReachCoarse[h * blocks + b] = reach > 0
+            ? 1 / (reach * hp.coarseForageFactor[h]) : 0;
+      }
+    }
     int[] order = s.reachOrder;
     for (int b = 0; b < blocks; b++) {
       int base = b * herbivores;
@@ -197,7 +204,7 @@ final class Herbivory {
     double[] satisfaction = s.satisfaction;
     double[] abundance = s.abundance;
     double[] intake = hp.intakeKgPerYear;
-    double[] coarse = hp.coarseForageFactor;
+    double[] inverseAvailable = s.inverseReachCoarse;
     for (int b = 0; b < blocks; b++) {
       double grazed = 0;
       double browsed = 0;
@@ -210,6 +217,7 @@ final class Herbivory {
         }
         double nearer = 0;
         double supplyK = supply[k];
+        double inverseSupply = supplyK > 0 ? 1 / supplyK : 0;
         for (int j = 0; j < herbivores; j++) {
           int h = order[b * herbivores + j];
           double reach = reachOf[h * blocks + b];
@@ -220,11 +228,11 @@ final class Herbivory {
           if (used == 0) {
             continue;
           }
-          double available = supplyK * reach * coarse[h];
           double competing = nearer + reach * farther;
-          pressure[h] += used * competing / available;
+          double depletion = competing * inverseSupply * inverseAvailable[h * blocks + b];
+          pressure[h] += used * depletion;
           // Share of its demand met here: all of it unless the category is over-used.
-          double got = competing > available ? used * available / competing : used;
+          double got = depletion > 1 ? used / depletion : used;
           satisfaction[h] += got;
           double eatenKg = abundance[h] * intake[h] * got;
           if (c < LOW_BROWSE) {
