@@ -8,10 +8,12 @@ import veldplan.shared.rng.CounterRandom;
  * Predation, then the year's change in the numbers of herbivore guilds, elephants and predators.
  *
  * <h2>Herbivore guilds</h2>
- * Ricker growth ln(N'/N) = r_m (1 - P / F) + sigma z, with r_m the maximum rate of increase
- * (Caughley &amp; Krebs 1983 unless the scenario gives one), F the forage within reach and P the
- * competition-weighted forage pressure ({@link Herbivory}): capacity is forage over intake per
- * head. The food term is floored at -2 (at most 86 % lost to starvation in a year). Predation
+ * Theta-Ricker growth ln(N'/N) = r_m (1 - D^theta) + sigma z, with r_m the maximum rate of
+ * increase (Caughley &amp; Krebs 1983 unless the scenario gives one) and D the depletion of the
+ * forage the guild uses ({@link Herbivory}; 1 = demand equals supply): capacity is forage over
+ * intake per head. theta = max(1, sqrt(W / 450 kg)): large mammals feel density dependence late,
+ * close to capacity (Fowler 1981, Ecology 62: 602–610, from memory); theta is 1 for most guilds
+ * and about 2.3 for elephants (our calibration). The food term is floored at -2 (at most 86 % lost to starvation in a year). Predation
  * then removes the killed share.
  *
  * <h2>Predators</h2>
@@ -101,7 +103,10 @@ final class Animals {
       if (n == 0) {
         continue;
       }
-      double food = s.forageKg[h] > 0 ? s.pressureKg[h] / s.forageKg[h] : Double.POSITIVE_INFINITY;
+      double depletion = s.forageKg[h] > 0 ? s.pressureKg[h] / s.forageKg[h]
+          : Double.POSITIVE_INFINITY;
+      double food = hp.densityShape[h] == 1 ? depletion
+          : Math.pow(depletion, hp.densityShape[h]);
       double logGrowth;
       if (h == e) {
         double births = ep.breedingFemaleFraction() * ep.calvesPerFemalePerYear();

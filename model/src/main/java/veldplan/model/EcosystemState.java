@@ -71,10 +71,8 @@ public final class EcosystemState {
   final double[] tallShare;
   /** Resource shares p[herbivore * categories + category], categories = blocks * 3. */
   final double[] resourceShare;
-  /** 1 / (reach x coarse-forage factor) [herbivore * blocks + block]; 0 where out of reach. */
-  final double[] inverseReachCoarse;
-  /** Herbivores in order of reach, shortest first, per block [block * herbivores + j]. */
-  final int[] reachOrder;
+  /** 1 / reach [herbivore * blocks + block]; 0 where out of reach. */
+  final double[] inverseReach;
   /** Demand per category per unit of reach [herbivore * categories + category] (kg DM). */
   final double[] demandDensity;
   final double[] nextClasses = new double[TreeClass.COUNT];
@@ -113,8 +111,7 @@ public final class EcosystemState {
     preyBiomassKg = new double[predators];
     tallShare = new double[blocks];
     resourceShare = new double[herbivores * blocks * Herbivory.CATEGORIES_PER_BLOCK];
-    reachOrder = new int[blocks * herbivores];
-    inverseReachCoarse = new double[blocks * herbivores];
+    inverseReach = new double[blocks * herbivores];
     demandDensity = new double[herbivores * blocks * Herbivory.CATEGORIES_PER_BLOCK];
   }
 

@@ -43,7 +43,7 @@ public record FireParameters(
    * trees: "a few %" (Higgins et al. 2000, from memory). The rest is our calibration.
    */
   public static FireParameters defaults() {
-    return new FireParameters(2.5, 28, 88, 1.5, 1200, 300, 0.6, 185, 12,
+    return new FireParameters(2.5, 28, 88, 1.5, 1200, 300, 0.35, 185, 12,
         1.17, -3.44, 0.038, 0.04);
   }
 }

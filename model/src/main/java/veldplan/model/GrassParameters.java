@@ -48,6 +48,6 @@ public record GrassParameters(
    * (methods sheet §6, from memory); we take 10 / 32 / 44.
    */
   public static GrassParameters defaults() {
-    return new GrassParameters(7.0, 0.1, 0.15, 6000, 0.2, 0.10, 0.6, 0.7, 10, 32, 44, 0.3);
+    return new GrassParameters(7.0, 0.1, 0.15, 6000, 0.15, 0.08, 0.6, 0.7, 10, 32, 44, 0.3);
   }
 }

@@ -31,7 +31,11 @@ public final class HerbivoreParameters {
    * the order tall grass, short grass, low browse, high browse ({@link Herbivory}).
    */
   final double[] acceptance;
-  /** Supply multiplier from coarse forage only large herbivores use: max(1, (W/450)^0.25). */
+  /** 1 / acceptance, 0 where nothing is accepted. */
+  final double[] inverseAcceptance;
+  /** theta = max(1, sqrt(W / 450)): shape of density dependence (theta-Ricker), see Animals. */
+  final double[] densityShape;
+  /** f = max(1, (W/450)^0.25): a large herbivore takes 1/f of its intake from shared forage. */
   final double[] coarseForageFactor;
 
   HerbivoreParameters(String[] names, double[] bodyMassKg, double[] intakeKgPerYear,
@@ -55,8 +59,14 @@ public final class HerbivoreParameters {
           + " values per herbivore");
     }
     this.acceptance = acceptance.clone();
+    this.inverseAcceptance = new double[acceptance.length];
+    for (int i = 0; i < acceptance.length; i++) {
+      inverseAcceptance[i] = acceptance[i] > 0 ? 1 / acceptance[i] : 0;
+    }
     this.coarseForageFactor = new double[count];
+    this.densityShape = new double[count];
     for (int h = 0; h < count; h++) {
+      densityShape[h] = Math.max(1, Math.sqrt(bodyMassKg[h] / LARGE_STOCK_UNIT_KG));
       coarseForageFactor[h] = Math.max(1, Math.pow(bodyMassKg[h] / LARGE_STOCK_UNIT_KG, 0.25));
     }
   }

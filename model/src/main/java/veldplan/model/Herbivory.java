@@ -26,14 +26,18 @@ import veldplan.model.ecology.WaterCoverage;
  * <h2>Coarse forage</h2>
  * Gut capacity scales with body mass while needs scale with mass^0.75, so large herbivores can
  * live on coarser forage (the Jarman–Bell principle; Demment &amp; Van Soest 1985; methods sheet
- * §9.2). A herbivore heavier than a 450 kg large stock unit sees the supply of every category
- * enlarged by (W / 450)^0.25: the stems, bark and coarse grass others leave.
+ * §9.2). A herbivore heavier than a 450 kg large stock unit takes only 1 / f of its intake from
+ * the forage the others use, f = (W / 450)^0.25, and the rest from the stems, bark and coarse
+ * grass others leave; both its own depletion and the depletion it causes others use that share.
  *
  * <h2>Sharing</h2>
  * Resources are (block, tall grass|short grass|low browse|high browse) categories. Each
  * herbivore spreads its demand (head x intake) over the categories in proportion to what it can
  * use of each (p_hk). In each category, the herbivore meets a depletion: the demand of all
- * herbivores on the part of the block within its reach, over the usable supply there. Its food
+ * herbivores on the part it can use — within its reach, and within the share of the category it
+ * accepts — over the usable supply there. A selective feeder that accepts a small share of a
+ * category is limited by that share, while others eating the whole category take from it in
+ * proportion. Its food
  * limitation is the p-weighted mean depletion (1 = demand equals supply), and it eats its demand
  * in each category, cut back pro rata where that category is over-used. Herbivores that share a
  * category feel the same depletion of it, so none is excluded merely by being outnumbered; what
@@ -51,10 +55,7 @@ final class Herbivory {
 
   private Herbivory() {}
 
-  /**
-   * Recomputes every herbivore's reach for the water points open this year, and the order of
-   * herbivores by reach in each block (shortest first; insertion sort, no allocation).
-   */
+  /** Recomputes every herbivore's reach for the water points open this year. */
   static void updateReach(BlockParameters bp, HerbivoreParameters hp, EcosystemState s) {
     int blocks = s.blocks;
     int herbivores = hp.count;
@@ -69,22 +70,7 @@ final class Herbivory {
     for (int h = 0; h < herbivores; h++) {
       for (int b = 0; b < blocks; b++) {
         double reach = s.reach[h * blocks + b];
-        s.inverseReachCoarse[h * blocks + b] = reach > 0
-            ? 1 / (reach * hp.coarseForageFactor[h]) : 0;
-      }
-    }
-    int[] order = s.reachOrder;
-    for (int b = 0; b < blocks; b++) {
-      int base = b * herbivores;
-      for (int j = 0; j < herbivores; j++) {
-        int h = j;
-        double r = s.reach[h * blocks + b];
-        int at = j;
-        while (at > 0 && s.reach[order[base + at - 1] * blocks + b] > r) {
-          order[base + at] = order[base + at - 1];
-          at--;
-        }
-        order[base + at] = h;
+        s.inverseReach[h * blocks + b] = reach > 0 ? 1 / reach : 0;
       }
     }
   }
@@ -188,53 +174,60 @@ final class Herbivory {
       s.satisfaction[o] = 0;
       for (int b = 0; b < blocks; b++) {
         double reach = s.reach[o * blocks + b];
-        double perReach = reach > 0 ? demand / reach : 0;
+        double perReach = reach > 0 ? demand / (reach * hp.coarseForageFactor[o]) : 0;
         for (int c = 0; c < CATEGORIES_PER_BLOCK; c++) {
           int k = CATEGORIES_PER_BLOCK * b + c;
           density[row + k] = perReach * share[row + k];
         }
       }
     }
-    // The demand on the part of a block within h's reach is sum_o density_o min(r_h, r_o).
-    // Walking the herbivores in order of reach, that is (sum over shorter or equal reach of
-    // density_o r_o) + r_h (sum over longer reach of density_o): one pass per category.
-    int[] order = s.reachOrder;
+    // The demand on the part of category k that h can use: every herbivore o spreads its demand
+    // evenly over the share of the block it reaches and over the share of the category it
+    // accepts; both are nested (reach around the same water, acceptance from the most to the
+    // least selective), so the part of o's demand falling where h feeds is
+    // min(1, r_h / r_o) x min(1, a_h / a_o).
     double[] reachOf = s.reach;
     double[] pressure = s.pressureKg;
     double[] satisfaction = s.satisfaction;
     double[] abundance = s.abundance;
     double[] intake = hp.intakeKgPerYear;
-    double[] inverseAvailable = s.inverseReachCoarse;
+    double[] inverseReach = s.inverseReach;
+    double[] coarse = hp.coarseForageFactor;
+    double[] inverseAccept = hp.inverseAcceptance;
     for (int b = 0; b < blocks; b++) {
       double grazed = 0;
       double browsed = 0;
       double elephantUse = 0;
       for (int c = 0; c < CATEGORIES_PER_BLOCK; c++) {
         int k = CATEGORIES_PER_BLOCK * b + c;
-        double farther = 0;
-        for (int o = 0; o < herbivores; o++) {
-          farther += density[o * categories + k];
-        }
-        double nearer = 0;
         double supplyK = supply[k];
-        double inverseSupply = supplyK > 0 ? 1 / supplyK : 0;
-        for (int j = 0; j < herbivores; j++) {
-          int h = order[b * herbivores + j];
-          double reach = reachOf[h * blocks + b];
-          double d = density[h * categories + k];
-          nearer += d * reach;
-          farther -= d;
+        if (supplyK <= 0) {
+          continue;
+        }
+        double inverseSupply = 1 / supplyK;
+        for (int h = 0; h < herbivores; h++) {
           double used = share[h * categories + k];
           if (used == 0) {
             continue;
           }
-          double competing = nearer + reach * farther;
-          double depletion = competing * inverseSupply * inverseAvailable[h * blocks + b];
+          double reach = reachOf[h * blocks + b];
+          double acceptance = accept[h * CATEGORIES_PER_BLOCK + c];
+          double competing = 0;
+          for (int o = 0; o < herbivores; o++) {
+            double d = density[o * categories + k];
+            if (d == 0) {
+              continue;
+            }
+            competing += d * Math.min(reach, reachOf[o * blocks + b])
+                * Math.min(1, acceptance * inverseAccept[o * CATEGORIES_PER_BLOCK + c]);
+          }
+          double depletion = competing * inverseSupply * inverseReach[h * blocks + b]
+              * inverseAccept[h * CATEGORIES_PER_BLOCK + c];
           pressure[h] += used * depletion;
           // Share of its demand met here: all of it unless the category is over-used.
           double got = depletion > 1 ? used / depletion : used;
           satisfaction[h] += got;
-          double eatenKg = abundance[h] * intake[h] * got;
+          double eatenKg = abundance[h] * intake[h] / coarse[h] * got;
           if (c < LOW_BROWSE) {
             grazed += eatenKg;
           } else if (c == LOW_BROWSE) {

@@ -50,20 +50,20 @@ public final class ParametersFromScenario {
    */
   static final double READILY_EVAPORABLE_SHARE = 0.15;
   /** Elephants' preference of browse over grass (our calibration). */
-  static final double ELEPHANT_BROWSE_PREFERENCE = 3;
+  static final double ELEPHANT_BROWSE_PREFERENCE = 1.5;
   /** Years from the start of contraception to fewer births (gestation about 22 months). */
   static final int GESTATION_LAG_YEARS = 2;
 
   /**
    * Share of tall grass, short grass, low browse (below 2 m) and high browse each feeding role
    * accepts, in GuildRole order. Our calibration after the qualitative literature: bulk grazers
-   * need a sward they can bite in bulk and take short grass less; selective grazers need tall
+   * take any grass, short swards a little less; selective grazers need tall
    * grass of particular species and condition, a small part of the tall grass (roan and sable
    * avoid short, heavily grazed swards, Harrington et al. 1999, from memory); small mixed feeders crop short grass and low shrubs (small animals subsist on
    * shorter swards, Illius &amp; Gordon 1987); browsers take low and some high browse.
    */
   static final double[][] ACCEPTANCE = {
-      {1.0, 0.4, 1.0, 0.1}, // bulk grazer
+      {1.0, 0.8, 1.0, 0.1}, // bulk grazer
       {0.15, 0.0, 1.0, 0.1}, // selective grazer
       {0.2, 0.2, 1.0, 0.3}, // browser
       {0.1, 1.0, 1.0, 0.1}, // mixed feeder

