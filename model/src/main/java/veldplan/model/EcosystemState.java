@@ -71,9 +71,9 @@ public final class EcosystemState {
   final double[] tallShare;
   /** Resource shares p[herbivore * categories + category], categories = blocks * 3. */
   final double[] resourceShare;
-  /** 1 / reach [herbivore * blocks + block]; 0 where out of reach. */
-  final double[] inverseReach;
-  /** Demand per category per unit of reach [herbivore * categories + category] (kg DM). */
+  /** Overlap weights [(category * herbivores + h) * herbivores + o], kept by Herbivory. */
+  final double[] overlap;
+  /** Demand per category per unit of reach and acceptance [category * herbivores + h]. */
   final double[] demandDensity;
   final double[] nextClasses = new double[TreeClass.COUNT];
 
@@ -111,7 +111,7 @@ public final class EcosystemState {
     preyBiomassKg = new double[predators];
     tallShare = new double[blocks];
     resourceShare = new double[herbivores * blocks * Herbivory.CATEGORIES_PER_BLOCK];
-    inverseReach = new double[blocks * herbivores];
+    overlap = new double[blocks * Herbivory.CATEGORIES_PER_BLOCK * herbivores * herbivores];
     demandDensity = new double[herbivores * blocks * Herbivory.CATEGORIES_PER_BLOCK];
   }
 

@@ -67,10 +67,26 @@ final class Herbivory {
                 bp.perennialRiverKm[b], d);
       }
     }
-    for (int h = 0; h < herbivores; h++) {
-      for (int b = 0; b < blocks; b++) {
-        double reach = s.reach[h * blocks + b];
-        s.inverseReach[h * blocks + b] = reach > 0 ? 1 / reach : 0;
+    // Overlap weights: the part of o's demand in category k that falls where h feeds, over
+    // the supply h can use there (as a share of the category's whole supply):
+    // min(r_h, r_o) / r_o x min(a_h, a_o) / a_o, divided by r_h a_h. Demand densities below
+    // are per unit of reach and acceptance, so the weight kept here is
+    // min(r_h, r_o) min(a_h, a_o) / (r_h a_h).
+    double[] accept = hp.acceptance;
+    for (int b = 0; b < blocks; b++) {
+      for (int c = 0; c < CATEGORIES_PER_BLOCK; c++) {
+        int k = CATEGORIES_PER_BLOCK * b + c;
+        for (int h = 0; h < herbivores; h++) {
+          double rh = s.reach[h * blocks + b];
+          double ah = accept[h * CATEGORIES_PER_BLOCK + c];
+          int row = (k * herbivores + h) * herbivores;
+          for (int o = 0; o < herbivores; o++) {
+            double ro = s.reach[o * blocks + b];
+            double ao = accept[o * CATEGORIES_PER_BLOCK + c];
+            s.overlap[row + o] = rh > 0 && ah > 0
+                ? Math.min(rh, ro) * Math.min(ah, ao) / (rh * ah) : 0;
+          }
+        }
       }
     }
   }
@@ -165,35 +181,33 @@ final class Herbivory {
     // Depletion each herbivore meets in each category: the demand of every herbivore on the
     // part of the block within its reach, over the supply there. Reach areas are nested (all
     // centred on the same water), and each herbivore spreads its demand evenly over its reach.
-    // Demand of each herbivore per category, per unit of the block share it reaches.
+    // Demand of each herbivore on each category, per unit of the share of it it can use
+    // (reach x acceptance), from forage the others also use (1 / coarse-forage factor).
     double[] density = s.demandDensity;
     for (int o = 0; o < herbivores; o++) {
-      double demand = s.abundance[o] * hp.intakeKgPerYear[o];
+      double demand = s.abundance[o] * hp.intakeKgPerYear[o] / hp.coarseForageFactor[o];
       int row = o * categories;
       s.pressureKg[o] = 0;
       s.satisfaction[o] = 0;
       for (int b = 0; b < blocks; b++) {
         double reach = s.reach[o * blocks + b];
-        double perReach = reach > 0 ? demand / (reach * hp.coarseForageFactor[o]) : 0;
         for (int c = 0; c < CATEGORIES_PER_BLOCK; c++) {
           int k = CATEGORIES_PER_BLOCK * b + c;
-          density[row + k] = perReach * share[row + k];
+          double usable = reach * accept[o * CATEGORIES_PER_BLOCK + c];
+          density[k * herbivores + o] = usable > 0 ? demand * share[row + k] / usable : 0;
         }
       }
     }
-    // The demand on the part of category k that h can use: every herbivore o spreads its demand
-    // evenly over the share of the block it reaches and over the share of the category it
-    // accepts; both are nested (reach around the same water, acceptance from the most to the
-    // least selective), so the part of o's demand falling where h feeds is
-    // min(1, r_h / r_o) x min(1, a_h / a_o).
-    double[] reachOf = s.reach;
+    // Depletion h meets in category k: the demand falling on the part of k it can use, over the
+    // supply of that part. Reach areas are nested (around the same water) and so are accepted
+    // shares (from the most to the least selective); each herbivore spreads its demand evenly
+    // over what it reaches and accepts. The overlap weights are kept by updateReach.
+    double[] overlap = s.overlap;
     double[] pressure = s.pressureKg;
     double[] satisfaction = s.satisfaction;
     double[] abundance = s.abundance;
     double[] intake = hp.intakeKgPerYear;
-    double[] inverseReach = s.inverseReach;
     double[] coarse = hp.coarseForageFactor;
-    double[] inverseAccept = hp.inverseAcceptance;
     for (int b = 0; b < blocks; b++) {
       double grazed = 0;
       double browsed = 0;
@@ -205,24 +219,18 @@ final class Herbivory {
           continue;
         }
         double inverseSupply = 1 / supplyK;
+        int demandRow = k * herbivores;
         for (int h = 0; h < herbivores; h++) {
           double used = share[h * categories + k];
           if (used == 0) {
             continue;
           }
-          double reach = reachOf[h * blocks + b];
-          double acceptance = accept[h * CATEGORIES_PER_BLOCK + c];
+          int weights = (k * herbivores + h) * herbivores;
           double competing = 0;
           for (int o = 0; o < herbivores; o++) {
-            double d = density[o * categories + k];
-            if (d == 0) {
-              continue;
-            }
-            competing += d * Math.min(reach, reachOf[o * blocks + b])
-                * Math.min(1, acceptance * inverseAccept[o * CATEGORIES_PER_BLOCK + c]);
+            competing += density[demandRow + o] * overlap[weights + o];
           }
-          double depletion = competing * inverseSupply * inverseReach[h * blocks + b]
-              * inverseAccept[h * CATEGORIES_PER_BLOCK + c];
+          double depletion = competing * inverseSupply;
           pressure[h] += used * depletion;
           // Share of its demand met here: all of it unless the category is over-used.
           double got = depletion > 1 ? used / depletion : used;
