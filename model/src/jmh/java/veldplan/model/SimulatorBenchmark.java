@@ -24,7 +24,7 @@ import veldplan.shared.scenario.ScenarioReader;
  * op). {@code gc.alloc.rate.norm} from {@code -prof gc} is the bytes allocated per run.
  *
  * <pre>{@code
- * mvn -q -B -Pbench -pl model -am verify -Dbench.args="SimulatorBenchmark -f 1 -wi 5 -i 5 -prof gc"
+ * mvn -q -B -Pbench -pl model -am verify -Dbench.args="SimulatorBenchmark -f 1 -wi 5 -w 2 -i 5 -r 2 -prof gc"
  * }</pre>
  */
 @State(Scope.Thread)

@@ -10,7 +10,10 @@ public final class BlockParameters {
   final double[] areaKm2;
   /** Plant-available water capacity of the root zone (mm): AW (Saxton &amp; Rawls 2006) x depth. */
   final double[] bucketCapacityMm;
-  /** Readily evaporable water of the surface layer, 0.4 x TEW of FAO-56 Eq. 73 (mm). */
+  /**
+   * Water the surface layer loses to evaporation after a storm before roots take it (mm):
+   * ParametersFromScenario.READILY_EVAPORABLE_SHARE x TEW of FAO-56 Eq. 73.
+   */
   final double[] evaporableWaterMm;
   final double[] altitudeM;
   final double[] latitudeDeg;

@@ -69,7 +69,7 @@ public final class EcosystemState {
   // ---- scratch
   /** Tall-grass share of this year's production [block]. */
   final double[] tallShare;
-  /** Resource shares p[herbivore * categories + category], categories = blocks * 3. */
+  /** Resource shares p[herbivore * categories + category], categories = blocks * 4. */
   final double[] resourceShare;
   /** Overlap weights [(category * herbivores + h) * herbivores + o], kept by Herbivory. */
   final double[] overlap;

@@ -10,7 +10,8 @@ package veldplan.model;
  *
  * <p>The soil water balance does not depend on the vegetation in this model (the trees and grass
  * divide the transpired water between them; they do not change how much is transpired), so the
- * whole monthly water balance is done here and the yearly loop only reads its results.
+ * whole water balance (monthly, stepped daily within each month) is done here and the yearly
+ * loop only reads its results.
  */
 public final class Forcing {
   final int years;

@@ -3,7 +3,7 @@ package veldplan.model;
 /**
  * Grass sub-model parameters.
  *
- * @param waterUseEfficiencyKgPerHaPerMm grass dry matter per mm of actual evapotranspiration at
+ * @param waterUseEfficiencyKgPerHaPerMm grass dry matter per mm of transpiration at
  *     optimal temperature and reference CO2, no trees (kg DM/ha/mm). Our calibration: with the
  *     soil bucket it gives rain-use efficiencies of about 3–6 kg/ha/mm at 400–700 mm, the range Le
  *     Houérou (1984) gives for semi-arid rangeland in good condition (from memory).

@@ -238,7 +238,9 @@ public final class ParametersFromScenario {
     Co2Pathways co2 = Co2Pathways.load();
     int years = sc.horizonYears();
     List<ClimatePathModel> out = new ArrayList<>();
-    for (ClimatePath path : sc.climate().paths()) {
+    List<ClimatePath> all = sc.climate().paths();
+    for (int index = 0; index < all.size(); index++) {
+      ClimatePath path = all.get(index);
       double[] ppm = new double[years];
       for (int y = 0; y < years; y++) {
         ppm[y] = co2.ppm(path.co2Pathway(), sc.startYear() + y);
@@ -256,7 +258,7 @@ public final class ParametersFromScenario {
             tmax[y * 12 + m] = table.tmaxC(first + y, m);
           }
         }
-        out.add(ClimatePathModel.explicit(path.name(), rain, tmin, tmax, ppm));
+        out.add(ClimatePathModel.explicit(path.name(), index, rain, tmin, tmax, ppm));
       } else {
         double[] factor = new double[years];
         double[] shift = new double[years];
@@ -265,7 +267,7 @@ public final class ParametersFromScenario {
           factor[y] = 1 + interpolate(path.deltaChange(), year, true) / 100;
           shift[y] = interpolate(path.deltaChange(), year, false);
         }
-        out.add(ClimatePathModel.deltaChange(path.name(), factor, shift, ppm));
+        out.add(ClimatePathModel.deltaChange(path.name(), index, factor, shift, ppm));
       }
     }
     return out;
@@ -293,13 +295,33 @@ public final class ParametersFromScenario {
 
   /** A study of a loaded scenario: every path and replicate, forcing computed. */
   public static Study study(LoadedScenario loaded) {
+    return study(loaded, null);
+  }
+
+  /**
+   * A study of some of a scenario's climate paths. Each path keeps the random streams it has in
+   * the whole scenario, so its replicates are the same whether it is run alone or with others.
+   *
+   * @param pathNames the paths to include, in scenario order; null = all
+   * @throws IllegalArgumentException if a name is not a path of the scenario
+   */
+  public static Study study(LoadedScenario loaded, List<String> pathNames) {
     Scenario sc = loaded.scenario();
     ModelParameters params = parameters(sc);
+    List<ClimatePathModel> paths = paths(loaded);
+    if (pathNames != null) {
+      for (String name : pathNames) {
+        if (paths.stream().noneMatch(p -> p.name().equals(name))) {
+          throw new IllegalArgumentException("no climate path named " + name);
+        }
+      }
+      paths = paths.stream().filter(p -> pathNames.contains(p.name())).toList();
+    }
     BaselineClimate baseline = baseline(loaded.baseline());
     BurnBlock reference = sc.park().blocks().get(0);
     int[] seasons = ForcingBuilder.fireSeasonMonths(baseline, reference.altitudeM(),
         reference.latitudeDeg());
-    return new Study(params, baseline, paths(loaded), sc.stochastic().replicates(),
+    return new Study(params, baseline, paths, sc.stochastic().replicates(),
         sc.stochastic().seed(), sc.stochastic().interannualVariabilityFactor(), seasons);
   }
 

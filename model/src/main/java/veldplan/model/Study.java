@@ -50,7 +50,7 @@ public final class Study {
         throw new IllegalArgumentException("climate path " + climate.name() + " covers "
             + climate.years() + " years, the horizon is " + params.years());
       }
-      long pathSeed = Seeds.pathSeed(seed, path);
+      long pathSeed = Seeds.pathSeed(seed, climate.seedIndex());
       for (int replicate = 0; replicate < replicates; replicate++) {
         long[] keys = Seeds.processKeys(Seeds.replicateSeed(pathSeed, replicate));
         Weather weather = WeatherGenerator.generate(baseline, climate, variabilityFactor,

@@ -151,7 +151,7 @@ final class TestParks {
     double[] co2 = new double[years];
     java.util.Arrays.fill(ones, 1);
     java.util.Arrays.fill(co2, co2Ppm);
-    ClimatePathModel path = ClimatePathModel.deltaChange("steady", ones, zeros, co2);
+    ClimatePathModel path = ClimatePathModel.deltaChange("steady", 0, ones, zeros, co2);
     int[] seasons = ForcingBuilder.fireSeasonMonths(baseline, 400, -24);
     return new Study(params, baseline, List.of(path), replicates, seed, 1.0, seasons);
   }

@@ -7,6 +7,7 @@ package veldplan.model.climate;
  */
 public final class ClimatePathModel {
   final String name;
+  final int seedIndex;
   final double[] rainfallFactor;
   final double[] temperatureShiftC;
   final double[] co2Ppm;
@@ -14,10 +15,14 @@ public final class ClimatePathModel {
   final double[] explicitTminC;
   final double[] explicitTmaxC;
 
-  private ClimatePathModel(String name, double[] rainfallFactor, double[] temperatureShiftC,
-      double[] co2Ppm, double[] explicitRainfallMm, double[] explicitTminC,
-      double[] explicitTmaxC) {
+  private ClimatePathModel(String name, int seedIndex, double[] rainfallFactor,
+      double[] temperatureShiftC, double[] co2Ppm, double[] explicitRainfallMm,
+      double[] explicitTminC, double[] explicitTmaxC) {
+    if (seedIndex < 0) {
+      throw new IllegalArgumentException("seedIndex must be >= 0: " + seedIndex);
+    }
     this.name = name;
+    this.seedIndex = seedIndex;
     this.rainfallFactor = rainfallFactor;
     this.temperatureShiftC = temperatureShiftC;
     this.co2Ppm = co2Ppm.clone();
@@ -29,24 +34,32 @@ public final class ClimatePathModel {
   /**
    * A delta-change path: baseline years are resampled, their rainfall multiplied by
    * {@code rainfallFactor[year]} and temperatures shifted by {@code temperatureShiftC[year]}.
+   *
+   * @param seedIndex the path's position in its scenario, which picks its random streams, so
+   *     that a path gets the same replicates whether it is simulated alone or with the others
    */
-  public static ClimatePathModel deltaChange(String name, double[] rainfallFactor,
-      double[] temperatureShiftC, double[] co2Ppm) {
+  public static ClimatePathModel deltaChange(String name, int seedIndex,
+      double[] rainfallFactor, double[] temperatureShiftC, double[] co2Ppm) {
     if (rainfallFactor.length != co2Ppm.length || temperatureShiftC.length != co2Ppm.length) {
       throw new IllegalArgumentException("delta arrays need one value per year");
     }
-    return new ClimatePathModel(name, rainfallFactor.clone(), temperatureShiftC.clone(), co2Ppm,
-        null, null, null);
+    return new ClimatePathModel(name, seedIndex, rainfallFactor.clone(),
+        temperatureShiftC.clone(), co2Ppm, null, null, null);
   }
 
-  /** An explicit path: the same monthly series in every replicate. */
-  public static ClimatePathModel explicit(String name, double[] rainfallMm, double[] tminC,
-      double[] tmaxC, double[] co2Ppm) {
+  /** An explicit path: the same monthly series in every replicate; see {@link #deltaChange}. */
+  public static ClimatePathModel explicit(String name, int seedIndex, double[] rainfallMm,
+      double[] tminC, double[] tmaxC, double[] co2Ppm) {
     if (rainfallMm.length != co2Ppm.length * 12) {
       throw new IllegalArgumentException("explicit series needs 12 months per year");
     }
-    return new ClimatePathModel(name, null, null, co2Ppm, rainfallMm.clone(), tminC.clone(),
-        tmaxC.clone());
+    return new ClimatePathModel(name, seedIndex, null, null, co2Ppm, rainfallMm.clone(),
+        tminC.clone(), tmaxC.clone());
+  }
+
+  /** The path's position in its scenario, which picks its random streams. */
+  public int seedIndex() {
+    return seedIndex;
   }
 
   /** The path's name. */

@@ -22,9 +22,8 @@ public final class Main implements Runnable {
     CommandLine cli = new CommandLine(new Main());
     cli.setParameterExceptionHandler((ex, a) -> {
       ex.getCommandLine().getErr().println("error: " + ex.getMessage());
-      ex.getCommandLine().getErr().println("Run 'veldplan "
-          + ex.getCommandLine().getCommandName().replace("veldplan", "").trim()
-          + " --help' for the options.");
+      ex.getCommandLine().getErr().println("Run '"
+          + ex.getCommandLine().getCommandSpec().qualifiedName() + " --help' for the options.");
       return ExitCodes.BAD_INPUT;
     });
     return cli.execute(args);

@@ -5,6 +5,7 @@ import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.IOException;
+import java.io.Writer;
 import java.io.PrintWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -14,8 +15,10 @@ import java.time.Duration;
 import java.time.Instant;
 import java.util.ArrayList;
 import java.util.HexFormat;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import java.util.concurrent.Callable;
 import java.util.concurrent.atomic.AtomicInteger;
 import me.tongfei.progressbar.ProgressBar;
@@ -34,8 +37,8 @@ import veldplan.model.Trajectory;
 import veldplan.optimiser.report.SimulationSummary;
 import veldplan.optimiser.report.TrajectoryCsv;
 import veldplan.shared.io.AtomicFiles;
+import veldplan.shared.io.IoConsumer;
 import veldplan.shared.scenario.ClimatePath;
-import veldplan.shared.scenario.Climate;
 import veldplan.shared.scenario.LoadedScenario;
 import veldplan.shared.scenario.Policy;
 import veldplan.shared.scenario.Scenario;
@@ -90,39 +93,35 @@ public final class SimulateCommand implements Callable<Integer> {
     PrintWriter err = spec.commandLine().getErr();
     PrintWriter stdout = spec.commandLine().getOut();
     Instant started = Instant.now();
+    List<String> optionProblems = new ArrayList<>();
+    if (replicates != null && (replicates < 1 || replicates > 100_000)) {
+      optionProblems.add("--replicates: " + replicates + " (expected 1 <= N <= 100000)");
+    }
+    if (threads != null && (threads < 1 || threads > 1024)) {
+      optionProblems.add("--threads: " + threads + " (expected 1 <= N <= 1024)");
+    }
+    if (Files.exists(out) && !Files.isDirectory(out)) {
+      optionProblems.add("--out: " + out + " exists and is not a folder (expected a folder to "
+          + "write into, or a name for a new one)");
+    }
+    if (!optionProblems.isEmpty()) {
+      return commandLineProblems(err, optionProblems);
+    }
+
     LoadedScenario loaded;
     Policy policy;
     try {
       loaded = ScenarioReader.load(scenarioFile);
       Scenario sc = loaded.scenario();
       policy = policyFile == null ? sc.policy() : ScenarioReader.readPolicy(policyFile, sc);
-      List<String> problems = new ArrayList<>();
-      if (replicates != null && (replicates < 1 || replicates > 100_000)) {
-        problems.add("--replicates: " + replicates + " (expected 1 <= N <= 100000)");
-      }
-      if (threads != null && (threads < 1 || threads > 1024)) {
-        problems.add("--threads: " + threads + " (expected 1 <= N <= 1024)");
-      }
-      List<ClimatePath> paths = sc.climate().paths();
-      if (pathName != null) {
-        paths = paths.stream().filter(p -> p.name().equals(pathName)).toList();
-        if (paths.isEmpty()) {
-          List<String> names = sc.climate().paths().stream().map(ClimatePath::name).toList();
-          problems.add("--path: no climate path named \"" + pathName + "\" in "
-              + scenarioFile + " (expected one of " + String.join(", ", names) + ")");
-        }
-      }
-      if (!problems.isEmpty()) {
-        err.println("error: " + problems.size() + " problem(s) on the command line");
-        problems.forEach(p -> err.println("  " + p));
-        return ExitCodes.BAD_INPUT;
+      List<String> names = sc.climate().paths().stream().map(ClimatePath::name).toList();
+      if (pathName != null && !names.contains(pathName)) {
+        return commandLineProblems(err, List.of("--path: no climate path named \"" + pathName
+            + "\" in " + scenarioFile + " (expected one of " + String.join(", ", names) + ")"));
       }
       Stochastic st = sc.stochastic();
       sc = sc.withStochastic(new Stochastic(replicates == null ? st.replicates() : replicates,
-          seed == null ? st.seed() : seed, st.interannualVariabilityFactor()));
-      sc = new Scenario(sc.name(), sc.startYear(), sc.horizonYears(), sc.park(), sc.guilds(),
-          sc.predators(), sc.elephants(), new Climate(sc.climate().baselineCsv(), paths),
-          sc.stochastic(), policy, sc.costs());
+          seed == null ? st.seed() : seed, st.interannualVariabilityFactor())).withPolicy(policy);
       loaded = new LoadedScenario(loaded.file(), sc, loaded.baseline(), loaded.pathSeries(),
           loaded.sha256());
     } catch (ScenarioException e) {
@@ -133,7 +132,9 @@ public final class SimulateCommand implements Callable<Integer> {
 
     try {
       Scenario sc = loaded.scenario();
-      Study study = ParametersFromScenario.study(loaded);
+      // A path simulated alone keeps the random streams it has in the whole scenario.
+      Study study = ParametersFromScenario.study(loaded,
+          pathName == null ? null : List.of(pathName));
       ManagementPlan plan = ParametersFromScenario.plan(policy, sc);
       int workers = threads != null ? threads : Runtime.getRuntime().availableProcessors();
       int total = study.paths().size() * study.replicates();
@@ -154,16 +155,20 @@ public final class SimulateCommand implements Callable<Integer> {
 
       Files.createDirectories(out);
       Path csv = out.resolve("trajectories.csv");
+      Path json = out.resolve("run.json");
       Trajectory[][] written = runs;
-      AtomicFiles.write(csv, w -> TrajectoryCsv.write(w, study.parameters(), pathNames, written));
       Instant finished = Instant.now();
-      AtomicFiles.writeString(out.resolve("run.json"), provenance(loaded, policy, pathNames,
-          study, workers, started, finished));
+      String provenance = provenance(loaded, policy, pathNames, study, workers, started,
+          finished);
+      Map<Path, IoConsumer<Writer>> files = new LinkedHashMap<>();
+      files.put(csv, w -> TrajectoryCsv.write(w, study.parameters(), pathNames, written));
+      files.put(json, w -> w.write(provenance));
+      AtomicFiles.writeAll(files);
 
       stdout.println(SimulationSummary.format(study.parameters(), pathNames, runs,
           policy.name()));
       stdout.printf(Locale.ROOT, "Wrote %s (%d runs) and %s in %.1f s.%n", csv, total,
-          out.resolve("run.json"), Duration.between(started, finished).toMillis() / 1000.0);
+          json, Duration.between(started, finished).toMillis() / 1000.0);
       stdout.println();
       stdout.println(Cautions.TEXT);
       stdout.flush();
@@ -175,7 +180,8 @@ public final class SimulateCommand implements Callable<Integer> {
       }
       return ExitCodes.FAILURE;
     } catch (RuntimeException e) {
-      err.println("error: the simulation failed: " + e.getMessage());
+      err.println("error: the simulation failed: "
+          + (e.getMessage() != null ? e.getMessage() : e.getClass().getSimpleName()));
       err.println("Scenario " + scenarioFile + ", seed " + loaded.scenario().stochastic().seed()
           + "; rerun with --debug for the stack trace and report it with the scenario.");
       if (debug) {
@@ -183,6 +189,13 @@ public final class SimulateCommand implements Callable<Integer> {
       }
       return ExitCodes.FAILURE;
     }
+  }
+
+  private static int commandLineProblems(PrintWriter err, List<String> problems) {
+    err.println("error: " + problems.size() + " problem(s) on the command line");
+    problems.forEach(p -> err.println("  " + p));
+    err.flush();
+    return ExitCodes.BAD_INPUT;
   }
 
   private String provenance(LoadedScenario loaded, Policy policy, List<String> pathNames,

@@ -195,6 +195,21 @@ class SimulateCommandTest {
   }
 
   @Test
+  void simulate_onePathAlone_sameReplicatesAsInAFullRun() throws IOException {
+    // The reproducibility contract: a path keeps its random streams when run alone.
+    List<ClimatePath> paths = exampleScenario.climate().paths();
+    String last = paths.get(paths.size() - 1).name();
+    simulateExample(tmp.resolve("alone"), "--replicates", "1", "--path", last);
+    simulateExample(tmp.resolve("all"), "--replicates", "1");
+    List<Map<String, String>> alone = parseCsv(tmp.resolve("alone").resolve("trajectories.csv"));
+    List<Map<String, String>> inFull =
+        parseCsv(tmp.resolve("all").resolve("trajectories.csv")).stream()
+            .filter(row -> row.get("path").equals(last)).toList();
+    assertFalse(alone.isEmpty(), "no rows");
+    assertEquals(alone, inFull, "path " + last + " alone differs from the same path in a full run");
+  }
+
+  @Test
   void simulate_noInterventionPolicyFile_recordsPolicyAndPlansNoBurns() throws Exception {
     Path policyFile = example("duskveld", "policies", "no-intervention.yaml");
     Policy policy = ScenarioReader.readPolicy(policyFile, exampleScenario);
@@ -356,26 +371,44 @@ class SimulateCommandTest {
   // Output failures: exit 1
 
   @Test
-  void simulate_outIsRegularFile_exitsOneNamingPathWithoutStackTrace() throws IOException {
+  void simulate_outIsRegularFile_exitsTwoBeforeSimulating() throws IOException {
+    // A file where the output folder should be is a command-line problem, found before the
+    // (possibly long) simulation runs.
     Path file = Files.writeString(tmp.resolve("not-a-folder"), "keep me\n");
     Result r = run("simulate", resource("scenarios/valid/scenario.yaml").toString(),
         "--replicates", "1", "--out", file.toString());
 
-    assertEquals(ExitCodes.FAILURE, r.exitCode(), r.transcript());
-    assertTrue(r.err().contains(file.toString()), "stderr names " + file + "\n" + r.transcript());
+    assertEquals(ExitCodes.BAD_INPUT, r.exitCode(), r.transcript());
+    assertTrue(r.err().contains("--out: " + file), "stderr names " + file + "\n" + r.transcript());
+    assertTrue(r.err().contains("not a folder"), r.transcript());
     assertNoStackTrace(r);
     assertNoSummary(r);
     assertEquals("keep me\n", Files.readString(file), "the file given as --out was changed");
   }
 
   @Test
-  void simulate_outIsRegularFileWithDebug_exitsOneWithStackTrace() throws IOException {
+  void simulate_outInsideARegularFile_exitsOneNamingPathWithoutStackTrace() throws IOException {
     Path file = Files.writeString(tmp.resolve("not-a-folder"), "keep me\n");
+    Path out = file.resolve("results");
     Result r = run("simulate", resource("scenarios/valid/scenario.yaml").toString(),
-        "--replicates", "1", "--out", file.toString(), "--debug");
+        "--replicates", "1", "--out", out.toString());
 
     assertEquals(ExitCodes.FAILURE, r.exitCode(), r.transcript());
-    assertTrue(r.err().contains(file.toString()), "stderr names " + file + "\n" + r.transcript());
+    assertTrue(r.err().contains(out.toString()), "stderr names " + out + "\n" + r.transcript());
+    assertNoStackTrace(r);
+    assertNoSummary(r);
+    assertEquals("keep me\n", Files.readString(file), "the file in the --out path was changed");
+  }
+
+  @Test
+  void simulate_outInsideARegularFileWithDebug_exitsOneWithStackTrace() throws IOException {
+    Path file = Files.writeString(tmp.resolve("not-a-folder"), "keep me\n");
+    Path out = file.resolve("results");
+    Result r = run("simulate", resource("scenarios/valid/scenario.yaml").toString(),
+        "--replicates", "1", "--out", out.toString(), "--debug");
+
+    assertEquals(ExitCodes.FAILURE, r.exitCode(), r.transcript());
+    assertTrue(r.err().contains(out.toString()), "stderr names " + out + "\n" + r.transcript());
     assertTrue(r.err().lines().anyMatch(l -> l.trim().startsWith("at ")),
         "--debug shows no stack trace\n" + r.transcript());
   }

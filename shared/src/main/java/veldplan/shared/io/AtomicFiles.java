@@ -11,7 +11,9 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.nio.file.StandardOpenOption;
+import java.util.LinkedHashMap;
 import java.util.Locale;
+import java.util.Map;
 import java.util.concurrent.ThreadLocalRandom;
 
 /**
@@ -44,35 +46,62 @@ public final class AtomicFiles {
    *                     previous {@code target}, if any, is then unchanged
    */
   public static void write(Path target, IoConsumer<Writer> content) throws IOException {
-    Path absolute = target.toAbsolutePath();
-    Path directory = absolute.getParent();
-    if (directory == null) {
-      throw new IOException("target has no parent directory: " + target);
-    }
-    Path temporary = createTemporary(directory, absolute.getFileName().toString());
+    writeAll(Map.of(target, content));
+  }
+
+  /**
+   * Writes several files as one step: each is first written in full to a temporary file beside
+   * its target and forced to disk; only when all are written are they moved into place. If any
+   * content fails, every temporary file is deleted and no target is touched.
+   *
+   * @param contents target file and how to write it, in the order of the moves
+   * @throws IOException if a file cannot be written or moved
+   */
+  public static void writeAll(Map<Path, IoConsumer<Writer>> contents) throws IOException {
+    Map<Path, Path> temporaries = new LinkedHashMap<>();
     boolean moved = false;
     try {
-      try (FileChannel channel = FileChannel.open(temporary, StandardOpenOption.WRITE,
-          StandardOpenOption.TRUNCATE_EXISTING)) {
-        Writer writer = new BufferedWriter(
-            Channels.newWriter(channel, StandardCharsets.UTF_8.newEncoder(), -1));
-        content.accept(writer);
-        writer.flush();
-        channel.force(true);
+      for (Map.Entry<Path, IoConsumer<Writer>> entry : contents.entrySet()) {
+        Path absolute = entry.getKey().toAbsolutePath();
+        Path directory = absolute.getParent();
+        if (directory == null) {
+          throw new IOException("target has no parent directory: " + entry.getKey());
+        }
+        Path temporary = createTemporary(directory, absolute.getFileName().toString());
+        temporaries.put(absolute, temporary);
+        try (FileChannel channel = FileChannel.open(temporary, StandardOpenOption.WRITE,
+            StandardOpenOption.TRUNCATE_EXISTING)) {
+          Writer writer = new BufferedWriter(
+              Channels.newWriter(channel, StandardCharsets.UTF_8.newEncoder(), -1));
+          entry.getValue().accept(writer);
+          writer.flush();
+          channel.force(true);
+        }
       }
-      Files.move(temporary, absolute, StandardCopyOption.ATOMIC_MOVE,
-          StandardCopyOption.REPLACE_EXISTING);
+      for (Map.Entry<Path, Path> entry : temporaries.entrySet()) {
+        if (Files.isDirectory(entry.getKey())) {
+          throw new IOException(entry.getKey() + " is a folder, not a file");
+        }
+      }
+      for (Map.Entry<Path, Path> entry : temporaries.entrySet()) {
+        Files.move(entry.getValue(), entry.getKey(), StandardCopyOption.ATOMIC_MOVE,
+            StandardCopyOption.REPLACE_EXISTING);
+      }
       moved = true;
     } finally {
       if (!moved) {
-        try {
-          Files.deleteIfExists(temporary);
-        } catch (IOException | RuntimeException e) {
-          // The original failure matters more; the leftover name starts with a dot.
+        for (Path temporary : temporaries.values()) {
+          try {
+            Files.deleteIfExists(temporary);
+          } catch (IOException | RuntimeException e) {
+            // The original failure matters more; the leftover name starts with a dot.
+          }
         }
       }
     }
-    forceDirectory(directory);
+    for (Path target : temporaries.keySet()) {
+      forceDirectory(target.getParent());
+    }
   }
 
   /** Writes {@code text} to {@code target} atomically, in UTF-8. */

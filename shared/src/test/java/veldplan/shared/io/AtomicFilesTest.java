@@ -6,10 +6,13 @@ import static org.junit.jupiter.api.Assertions.assertSame;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 
 import java.io.IOException;
+import java.io.Writer;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.stream.Collectors;
 import java.util.stream.Stream;
 import org.junit.jupiter.api.Test;
@@ -33,6 +36,39 @@ class AtomicFilesTest {
 
     assertEquals("year,\u00b0C\n", Files.readString(target, StandardCharsets.UTF_8));
     assertEquals(List.of("out.csv"), names());
+  }
+
+  @Test
+  void writeAll_secondContentFails_neitherTargetTouchedAndNoTemporaryLeft() throws IOException {
+    Path first = dir.resolve("trajectories.csv");
+    Path second = dir.resolve("run.json");
+    Files.writeString(first, "old csv");
+    Files.writeString(second, "old json");
+    Map<Path, IoConsumer<Writer>> contents = new LinkedHashMap<>();
+    contents.put(first, w -> w.write("new csv"));
+    contents.put(second, w -> {
+      w.write("half");
+      throw new IOException("disk full");
+    });
+    assertThrows(IOException.class, () -> AtomicFiles.writeAll(contents));
+    assertEquals("old csv", Files.readString(first));
+    assertEquals("old json", Files.readString(second));
+    try (Stream<Path> files = Files.list(dir)) {
+      assertEquals(2, files.count(), "temporary files left behind");
+    }
+  }
+
+  @Test
+  void writeAll_bothContentsFine_bothReplaced() throws IOException {
+    Path first = dir.resolve("a.txt");
+    Path second = dir.resolve("b.txt");
+    Files.writeString(first, "old a");
+    Map<Path, IoConsumer<Writer>> contents = new LinkedHashMap<>();
+    contents.put(first, w -> w.write("new a"));
+    contents.put(second, w -> w.write("new b"));
+    AtomicFiles.writeAll(contents);
+    assertEquals("new a", Files.readString(first));
+    assertEquals("new b", Files.readString(second));
   }
 
   @Test
