@@ -71,6 +71,10 @@ public final class EcosystemState {
   final double[] tallShare;
   /** Resource shares p[herbivore * categories + category], categories = blocks * 4. */
   final double[] resourceShare;
+  /** 1 / (reach x acceptance) [herbivore * categories + category]; 0 where unusable. */
+  final double[] inverseUsable;
+  /** This year's demand on forage shared with others, head x intake / coarse factor (kg). */
+  final double[] sharedDemandKg;
   /** Overlap weights [(category * herbivores + h) * herbivores + o], kept by Herbivory. */
   final double[] overlap;
   /** Demand per category per unit of reach and acceptance [category * herbivores + h]. */
@@ -111,6 +115,8 @@ public final class EcosystemState {
     preyBiomassKg = new double[predators];
     tallShare = new double[blocks];
     resourceShare = new double[herbivores * blocks * Herbivory.CATEGORIES_PER_BLOCK];
+    inverseUsable = new double[blocks * Herbivory.CATEGORIES_PER_BLOCK * herbivores];
+    sharedDemandKg = new double[herbivores];
     overlap = new double[blocks * Herbivory.CATEGORIES_PER_BLOCK * herbivores * herbivores];
     demandDensity = new double[herbivores * blocks * Herbivory.CATEGORIES_PER_BLOCK];
   }

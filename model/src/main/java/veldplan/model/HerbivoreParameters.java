@@ -35,6 +35,8 @@ public final class HerbivoreParameters {
   final double[] inverseAcceptance;
   /** theta = max(1, sqrt(W / 450)): shape of density dependence (theta-Ricker), see Animals. */
   final double[] densityShape;
+  /** Intake from forage shared with others, intake / coarse-forage factor (kg DM/yr). */
+  final double[] sharedIntakeKgPerYear;
   /** f = max(1, (W/450)^0.25): a large herbivore takes 1/f of its intake from shared forage. */
   final double[] coarseForageFactor;
 
@@ -65,9 +67,11 @@ public final class HerbivoreParameters {
     }
     this.coarseForageFactor = new double[count];
     this.densityShape = new double[count];
+    this.sharedIntakeKgPerYear = new double[count];
     for (int h = 0; h < count; h++) {
       densityShape[h] = Math.max(1, Math.sqrt(bodyMassKg[h] / LARGE_STOCK_UNIT_KG));
       coarseForageFactor[h] = Math.max(1, Math.pow(bodyMassKg[h] / LARGE_STOCK_UNIT_KG, 0.25));
+      sharedIntakeKgPerYear[h] = intakeKgPerYear[h] / coarseForageFactor[h];
     }
   }
 

@@ -73,9 +73,14 @@ final class Herbivory {
     // are per unit of reach and acceptance, so the weight kept here is
     // min(r_h, r_o) min(a_h, a_o) / (r_h a_h).
     double[] accept = hp.acceptance;
+    int categories = blocks * CATEGORIES_PER_BLOCK;
     for (int b = 0; b < blocks; b++) {
       for (int c = 0; c < CATEGORIES_PER_BLOCK; c++) {
         int k = CATEGORIES_PER_BLOCK * b + c;
+        for (int h = 0; h < herbivores; h++) {
+          double usable = s.reach[h * blocks + b] * accept[h * CATEGORIES_PER_BLOCK + c];
+          s.inverseUsable[h * categories + k] = usable > 0 ? 1 / usable : 0;
+        }
         for (int h = 0; h < herbivores; h++) {
           double rh = s.reach[h * blocks + b];
           double ah = accept[h * CATEGORIES_PER_BLOCK + c];
@@ -184,18 +189,16 @@ final class Herbivory {
     // Demand of each herbivore on each category, per unit of the share of it it can use
     // (reach x acceptance), from forage the others also use (1 / coarse-forage factor).
     double[] density = s.demandDensity;
+    double[] inverseUsable = s.inverseUsable;
+    double[] sharedDemand = s.sharedDemandKg;
     for (int o = 0; o < herbivores; o++) {
-      double demand = s.abundance[o] * hp.intakeKgPerYear[o] / hp.coarseForageFactor[o];
+      double demand = s.abundance[o] * hp.sharedIntakeKgPerYear[o];
+      sharedDemand[o] = demand;
       int row = o * categories;
       s.pressureKg[o] = 0;
       s.satisfaction[o] = 0;
-      for (int b = 0; b < blocks; b++) {
-        double reach = s.reach[o * blocks + b];
-        for (int c = 0; c < CATEGORIES_PER_BLOCK; c++) {
-          int k = CATEGORIES_PER_BLOCK * b + c;
-          double usable = reach * accept[o * CATEGORIES_PER_BLOCK + c];
-          density[k * herbivores + o] = usable > 0 ? demand * share[row + k] / usable : 0;
-        }
+      for (int k = 0; k < categories; k++) {
+        density[k * herbivores + o] = demand * share[row + k] * inverseUsable[row + k];
       }
     }
     // Depletion h meets in category k: the demand falling on the part of k it can use, over the
@@ -206,8 +209,6 @@ final class Herbivory {
     double[] pressure = s.pressureKg;
     double[] satisfaction = s.satisfaction;
     double[] abundance = s.abundance;
-    double[] intake = hp.intakeKgPerYear;
-    double[] coarse = hp.coarseForageFactor;
     for (int b = 0; b < blocks; b++) {
       double grazed = 0;
       double browsed = 0;
@@ -235,7 +236,7 @@ final class Herbivory {
           // Share of its demand met here: all of it unless the category is over-used.
           double got = depletion > 1 ? used / depletion : used;
           satisfaction[h] += got;
-          double eatenKg = abundance[h] * intake[h] / coarse[h] * got;
+          double eatenKg = sharedDemand[h] * got;
           if (c < LOW_BROWSE) {
             grazed += eatenKg;
           } else if (c == LOW_BROWSE) {
