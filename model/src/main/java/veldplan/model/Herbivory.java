@@ -96,18 +96,21 @@ final class Herbivory {
     }
   }
 
+  /** Forage, sharing and grazing of one year; see the class comment. */
   static void forageAndGraze(ModelParameters p, EcosystemState s) {
-    BlockParameters bp = p.blocks();
-    HerbivoreParameters hp = p.herbivores();
+    browseAndTallGrass(p, s);
+    elephantDiet(p, s);
+    usableForage(p, s);
+    compete(p, s);
+    eat(s);
+  }
+
+  /** Browse below and above 2 m, and this year's tall-grass share, per block. */
+  private static void browseAndTallGrass(ModelParameters p, EcosystemState s) {
     TreeParameters t = p.trees();
     GrassParameters gp = p.grass();
     double grassUse = gp.properUseFraction();
-    double browseUse = gp.browseUseFraction();
     int blocks = s.blocks;
-    int herbivores = hp.count;
-    int categories = blocks * CATEGORIES_PER_BLOCK;
-    double[] accept = hp.acceptance;
-
     for (int b = 0; b < blocks; b++) {
       double low = 0;
       double high = 0;
@@ -123,6 +126,15 @@ final class Herbivory {
       s.tallShare[b] = gp.tallGrassMaxShare() * (1 - gp.grazingLawnEffect() * intensity);
     }
 
+  }
+
+  /** Share of grass in each herbivore's diet; elephants choose by what they find. */
+  private static void elephantDiet(ModelParameters p, EcosystemState s) {
+    BlockParameters bp = p.blocks();
+    HerbivoreParameters hp = p.herbivores();
+    int blocks = s.blocks;
+    int herbivores = hp.count;
+    double[] accept = hp.acceptance;
     // Elephants' diet: browse preferred over grass in proportion to what they accept in reach.
     int e = hp.elephant;
     int ea = e * CATEGORIES_PER_BLOCK;
@@ -145,6 +157,19 @@ final class Herbivory {
       }
     }
 
+  }
+
+  /** Usable supply per category, and each herbivore's forage and shares p_hk. */
+  private static void usableForage(ModelParameters p, EcosystemState s) {
+    GrassParameters gp = p.grass();
+    double grassUse = gp.properUseFraction();
+    double browseUse = gp.browseUseFraction();
+    double[] accept = p.herbivores().acceptance;
+    BlockParameters bp = p.blocks();
+    HerbivoreParameters hp = p.herbivores();
+    int blocks = s.blocks;
+    int herbivores = hp.count;
+    int categories = blocks * CATEGORIES_PER_BLOCK;
     // Usable forage per category (tall grass, short grass, low and high browse of each block).
     double[] supply = s.categorySupplyKg;
     for (int b = 0; b < blocks; b++) {
@@ -183,9 +208,18 @@ final class Herbivory {
       }
     }
 
-    // Depletion each herbivore meets in each category: the demand of every herbivore on the
-    // part of the block within its reach, over the supply there. Reach areas are nested (all
-    // centred on the same water), and each herbivore spreads its demand evenly over its reach.
+  }
+
+  /** Depletion each herbivore meets, what it gets, and what is eaten where. */
+  private static void compete(ModelParameters p, EcosystemState s) {
+    int e = p.herbivores().elephant;
+    double[] supply = s.categorySupplyKg;
+    double[] share = s.resourceShare;
+    BlockParameters bp = p.blocks();
+    HerbivoreParameters hp = p.herbivores();
+    int blocks = s.blocks;
+    int herbivores = hp.count;
+    int categories = blocks * CATEGORIES_PER_BLOCK;
     // Demand of each herbivore on each category, per unit of the share of it it can use
     // (reach x acceptance), from forage the others also use (1 / coarse-forage factor).
     double[] density = s.demandDensity;
@@ -247,6 +281,7 @@ final class Herbivory {
           }
         }
       }
+      // Eaten kg/ha for now; eat() turns both into shares of what there was.
       s.grazedFraction[b] = grazed / bp.areaHa[b];
       s.browsePressure[b] = browsed / bp.areaHa[b];
       s.elephantsPerKm2[b] = abundance[e] * elephantUse / bp.areaKm2[b];
@@ -254,6 +289,11 @@ final class Herbivory {
     for (int h = 0; h < herbivores; h++) {
       s.pressureKg[h] *= s.forageKg[h];
     }
+  }
+
+  /** Grazing takes grass from the fuel; the grazed and browsed shares of the year. */
+  private static void eat(EcosystemState s) {
+    int blocks = s.blocks;
     for (int b = 0; b < blocks; b++) {
       double eatenKgPerHa = Math.min(s.grazedFraction[b], s.fuelKgPerHa[b]);
       s.fuelKgPerHa[b] -= eatenKgPerHa;
