@@ -153,6 +153,10 @@ public final class SimulateCommand implements Callable<Integer> {
       List<String> pathNames = new ArrayList<>();
       study.paths().forEach(p -> pathNames.add(p.name()));
 
+      if (showBar) {
+        err.println("writing " + out.resolve("trajectories.csv") + " ...");
+        err.flush();
+      }
       Files.createDirectories(out);
       Path csv = out.resolve("trajectories.csv");
       Path json = out.resolve("run.json");
