@@ -73,6 +73,8 @@ public final class EcosystemState {
   final double[] resourceShare;
   /** 1 / (reach x acceptance) [herbivore * categories + category]; 0 where unusable. */
   final double[] inverseUsable;
+  /** 1 / usable supply per category this year; 0 where there is none. */
+  final double[] inverseSupply;
   /** This year's demand on forage shared with others, head x intake / coarse factor (kg). */
   final double[] sharedDemandKg;
   /** Overlap weights [(category * herbivores + h) * herbivores + o], kept by Herbivory. */
@@ -117,6 +119,7 @@ public final class EcosystemState {
     resourceShare = new double[herbivores * blocks * Herbivory.CATEGORIES_PER_BLOCK];
     inverseUsable = new double[blocks * Herbivory.CATEGORIES_PER_BLOCK * herbivores];
     sharedDemandKg = new double[herbivores];
+    inverseSupply = new double[blocks * Herbivory.CATEGORIES_PER_BLOCK];
     overlap = new double[blocks * Herbivory.CATEGORIES_PER_BLOCK * herbivores * herbivores];
     demandDensity = new double[herbivores * blocks * Herbivory.CATEGORIES_PER_BLOCK];
   }

@@ -229,8 +229,6 @@ final class Herbivory {
       double demand = s.abundance[o] * hp.sharedIntakeKgPerYear[o];
       sharedDemand[o] = demand;
       int row = o * categories;
-      s.pressureKg[o] = 0;
-      s.satisfaction[o] = 0;
       for (int k = 0; k < categories; k++) {
         density[k * herbivores + o] = demand * share[row + k] * inverseUsable[row + k];
       }
@@ -239,55 +237,59 @@ final class Herbivory {
     // supply of that part. Reach areas are nested (around the same water) and so are accepted
     // shares (from the most to the least selective); each herbivore spreads its demand evenly
     // over what it reaches and accepts. The overlap weights are kept by updateReach.
-    double[] overlap = s.overlap;
-    double[] pressure = s.pressureKg;
-    double[] satisfaction = s.satisfaction;
-    double[] abundance = s.abundance;
+    double[] inverseSupply = s.inverseSupply;
+    for (int k = 0; k < categories; k++) {
+      inverseSupply[k] = supply[k] > 0 ? 1 / supply[k] : 0;
+    }
+    double[] grazedKg = s.grazedFraction;
+    double[] browsedKg = s.browsePressure;
+    double[] elephantUse = s.elephantsPerKm2;
     for (int b = 0; b < blocks; b++) {
-      double grazed = 0;
-      double browsed = 0;
-      double elephantUse = 0;
-      for (int c = 0; c < CATEGORIES_PER_BLOCK; c++) {
-        int k = CATEGORIES_PER_BLOCK * b + c;
-        double supplyK = supply[k];
-        if (supplyK <= 0) {
+      grazedKg[b] = 0;
+      browsedKg[b] = 0;
+      elephantUse[b] = 0;
+    }
+    double[] overlap = s.overlap;
+    for (int h = 0; h < herbivores; h++) {
+      int row = h * categories;
+      double demand = sharedDemand[h];
+      double pressure = 0;
+      double satisfied = 0;
+      for (int k = 0; k < categories; k++) {
+        double used = share[row + k];
+        if (used == 0) {
           continue;
         }
-        double inverseSupply = 1 / supplyK;
         int demandRow = k * herbivores;
-        for (int h = 0; h < herbivores; h++) {
-          double used = share[h * categories + k];
-          if (used == 0) {
-            continue;
-          }
-          int weights = (k * herbivores + h) * herbivores;
-          double competing = 0;
-          for (int o = 0; o < herbivores; o++) {
-            competing += density[demandRow + o] * overlap[weights + o];
-          }
-          double depletion = competing * inverseSupply;
-          pressure[h] += used * depletion;
-          // Share of its demand met here: all of it unless the category is over-used.
-          double got = depletion > 1 ? used / depletion : used;
-          satisfaction[h] += got;
-          double eatenKg = sharedDemand[h] * got;
-          if (c < LOW_BROWSE) {
-            grazed += eatenKg;
-          } else if (c == LOW_BROWSE) {
-            browsed += eatenKg;
-          }
-          if (h == e) {
-            elephantUse += used;
-          }
+        int weights = (k * herbivores + h) * herbivores;
+        double competing = 0;
+        for (int o = 0; o < herbivores; o++) {
+          competing += density[demandRow + o] * overlap[weights + o];
+        }
+        double depletion = competing * inverseSupply[k];
+        pressure += used * depletion;
+        // Share of its demand met here: all of it unless the category is over-used.
+        double got = depletion > 1 ? used / depletion : used;
+        satisfied += got;
+        int b = k / CATEGORIES_PER_BLOCK;
+        int c = k - b * CATEGORIES_PER_BLOCK;
+        if (c < LOW_BROWSE) {
+          grazedKg[b] += demand * got;
+        } else if (c == LOW_BROWSE) {
+          browsedKg[b] += demand * got;
+        }
+        if (h == e) {
+          elephantUse[b] += used;
         }
       }
-      // Eaten kg/ha for now; eat() turns both into shares of what there was.
-      s.grazedFraction[b] = grazed / bp.areaHa[b];
-      s.browsePressure[b] = browsed / bp.areaHa[b];
-      s.elephantsPerKm2[b] = abundance[e] * elephantUse / bp.areaKm2[b];
+      s.pressureKg[h] = pressure * s.forageKg[h];
+      s.satisfaction[h] = satisfied;
     }
-    for (int h = 0; h < herbivores; h++) {
-      s.pressureKg[h] *= s.forageKg[h];
+    for (int b = 0; b < blocks; b++) {
+      // Eaten kg/ha for now; eat() turns both into shares of what there was.
+      grazedKg[b] /= bp.areaHa[b];
+      browsedKg[b] /= bp.areaHa[b];
+      elephantUse[b] *= s.abundance[e] / bp.areaKm2[b];
     }
   }
 
