@@ -2,6 +2,8 @@ package veldplan.model;
 
 import org.apache.commons.numbers.gamma.InverseErfc;
 import veldplan.model.ecology.CarboneGittleman;
+import veldplan.model.ecology.FunctionalResponse;
+import veldplan.model.ecology.PreySwitching;
 import veldplan.shared.rng.CounterRandom;
 
 /**
@@ -17,8 +19,10 @@ import veldplan.shared.rng.CounterRandom;
  * then removes the killed share.
  *
  * <h2>Predators</h2>
- * Kills per predator follow a Holling type II response to prey biomass density; kills are shared
- * among prey by Murdoch-type switching, share_i = (N_i m_i)^m / sum (N_j m_j)^m, so predators turn
+ * Kills per predator follow a Holling type II (or, if the scenario says so, type III) response to
+ * the biomass density of the prey it hunts, with handling time 1 / (maximum kill) and the attack
+ * rate that halves kills at the half-saturation density; kills are shared among prey by
+ * Murdoch-type switching, share_i = B_i^m / sum B_j^m with B the prey biomass, so predators turn
  * to whatever is abundant. Predator numbers follow Ricker growth towards the Carbone &amp;
  * Gittleman (2002) capacity, 90 kg of a carnivore per 10,000 kg of its prey, at a maximum rate
  * half that of a herbivore of the same mass (our calibration: carnivores breed more slowly, common
@@ -40,6 +44,8 @@ import veldplan.shared.rng.CounterRandom;
 final class Animals {
   /** Floor of the yearly log growth from food. */
   static final double MIN_LOG_GROWTH = -2;
+  /** Smallest rate at which food limits elephant growth (1/yr); our choice. */
+  static final double ELEPHANT_FOOD_RATE = 0.02;
   /** Largest share of a guild predators can take in a year. */
   private static final double MAX_PREDATION = 0.95;
 
@@ -56,33 +62,33 @@ final class Animals {
     HerbivoreParameters hp = p.herbivores();
     PredatorParameters pp = p.predators();
     int herbivores = hp.count;
+    double[] preyKg = s.preyKg;
     for (int h = 0; h < herbivores; h++) {
       s.predationHazard[h] = 0;
+      preyKg[h] = s.abundance[h] * hp.bodyMassKg[h];
     }
-    double parkKm2 = p.blocks().totalAreaKm2();
+    double parkKm2 = pp.parkKm2;
     for (int q = 0; q < pp.count; q++) {
-      int row = q * herbivores;
+      double[] preference = pp.preference[q];
       double biomass = 0;
-      double denominator = 0;
-      double m = pp.switchingExponent[q];
       for (int h = 0; h < herbivores; h++) {
-        if (pp.hunts[row + h] > 0) {
-          double kg = s.abundance[h] * hp.bodyMassKg[h];
-          biomass += kg;
-          denominator += Math.pow(kg, m);
-        }
+        biomass += preference[h] * preyKg[h];
       }
       s.preyBiomassKg[q] = biomass;
       if (biomass == 0 || s.predatorAbundance[q] == 0) {
         continue;
       }
       double density = biomass / parkKm2;
-      double kills = s.predatorAbundance[q] * pp.killKgPerYear[q]
-          * density / (density + pp.halfSaturationKgPerKm2[q]);
+      double perPredator = pp.responseType[q] == 3
+          ? FunctionalResponse.typeIII(pp.attackRate[q], pp.handlingTimeYears[q], density)
+          : FunctionalResponse.typeII(pp.attackRate[q], pp.handlingTimeYears[q], density);
+      double kills = s.predatorAbundance[q] * perPredator;
+      double m = pp.switchingExponent[q];
+      double denominator = PreySwitching.denominator(preference, preyKg, m);
       for (int h = 0; h < herbivores; h++) {
-        if (pp.hunts[row + h] > 0 && s.abundance[h] > 0) {
-          double kg = s.abundance[h] * hp.bodyMassKg[h];
-          s.predationHazard[h] += kills * Math.pow(kg, m) / denominator / kg;
+        if (preference[h] > 0 && preyKg[h] > 0) {
+          s.predationHazard[h] += kills
+              * PreySwitching.share(preference[h], preyKg[h], m, denominator) / preyKg[h];
         }
       }
     }
@@ -103,21 +109,27 @@ final class Animals {
       if (n == 0) {
         continue;
       }
-      double depletion = s.forageKg[h] > 0 ? s.pressureKg[h] / s.forageKg[h]
-          : Double.POSITIVE_INFINITY;
-      double food = hp.densityShape[h] == 1 ? depletion
-          : Math.pow(depletion, hp.densityShape[h]);
       double logGrowth;
-      if (h == e) {
-        double births = ep.breedingFemaleFraction() * ep.calvesPerFemalePerYear();
-        double maxRate = Math.log(1 + births - ep.mortalityPerYear());
-        double coverage = year >= ep.gestationLagYears()
-            ? s.coverageHistory[(year - ep.gestationLagYears()) % s.lagSlots] : 0;
-        double rate = Math.log(Math.max(1e-9, 1 + births
-            * (1 - ep.contraceptionEfficacy() * coverage) - ep.mortalityPerYear()));
-        logGrowth = Math.max(MIN_LOG_GROWTH, rate - Math.max(0, maxRate) * food);
+      if (s.forageKg[h] <= 0) {
+        logGrowth = MIN_LOG_GROWTH; // nothing to eat within reach
       } else {
-        logGrowth = Math.max(MIN_LOG_GROWTH, hp.maxGrowthRatePerYear[h] * (1 - food));
+        double depletion = s.pressureKg[h] / s.forageKg[h];
+        double food = hp.densityShape[h] == 1 ? depletion
+            : Math.pow(depletion, hp.densityShape[h]);
+        if (h == e) {
+          double births = ep.breedingFemaleFraction() * ep.calvesPerFemalePerYear();
+          double coverage = year >= ep.gestationLagYears()
+              ? s.coverageHistory[(year - ep.gestationLagYears()) % s.lagSlots] : 0;
+          double rate = Math.log(Math.max(1e-9, 1 + births
+              * (1 - ep.contraceptionEfficacy() * coverage) - ep.mortalityPerYear()));
+          // Food limits growth at the rate of a population without contraception, so that
+          // growth stops where demand meets supply; at least ELEPHANT_FOOD_RATE, so that food
+          // still matters when births do not outnumber deaths.
+          double scale = Math.max(ELEPHANT_FOOD_RATE, hp.maxGrowthRatePerYear[h]);
+          logGrowth = Math.max(MIN_LOG_GROWTH, rate - scale * food);
+        } else {
+          logGrowth = Math.max(MIN_LOG_GROWTH, hp.maxGrowthRatePerYear[h] * (1 - food));
+        }
       }
       n *= Math.exp(logGrowth + noise) * (1 - Math.min(MAX_PREDATION, s.predationHazard[h]));
       s.abundance[h] = n < 1 ? 0 : n;

@@ -52,7 +52,7 @@ final class AnnualCycle {
       case 0 -> Management.startOfYear(p, plan, year, s);
       case 1 -> Grass.grow(p.grass(), p.trees(), f, year, s);
       case 2 -> Herbivory.forageAndGraze(p, s);
-      case 3 -> Fire.burn(p.fire(), plan, f, year, s);
+      case 3 -> Fire.burn(p, plan, f, year, s);
       case 4 -> Trees.update(p, f, year, s);
       case 5 -> Animals.hunt(p, s);
       case 6 -> Animals.breedAndDie(p, f, year, s);

@@ -6,6 +6,8 @@ package veldplan.model;
  */
 public enum BlockSeries {
   RAINFALL("rainfall_mm"),
+  POTENTIAL_EVAPOTRANSPIRATION("pet_linacre_mm"),
+  OPEN_WATER_EVAPORATION("open_water_evaporation_mm"),
   ACTUAL_EVAPOTRANSPIRATION("aet_mm"),
   GROWING_DAYS("growing_days"),
   GRASS_PRODUCTION("grass_production_kg_per_ha"),
@@ -25,7 +27,7 @@ public enum BlockSeries {
   WATER_POINTS_OPEN("water_points_open");
 
   /** Number of series. */
-  public static final int COUNT = 18;
+  public static final int COUNT = 20;
   private static final BlockSeries[] ALL = values();
 
   private final String column;

@@ -53,10 +53,10 @@ public final class EcosystemState {
   final double[] forageKg;
   final double[] pressureKg;
   final double[] predationHazard;
-  /** Share of each herbivore's demand it could eat this year (0..1) [herbivore]. */
-  final double[] satisfaction;
   /** Usable forage per category this year (kg DM) [block * 4 + category]. */
   final double[] categorySupplyKg;
+  /** Biomass of each herbivore (kg) [herbivore], scratch for predation. */
+  final double[] preyKg;
   /** Biomass of the prey each predator hunts (kg) [predator]. */
   final double[] preyBiomassKg;
   double costBurning;
@@ -82,6 +82,16 @@ public final class EcosystemState {
   /** Demand per category per unit of reach and acceptance [category * herbivores + h]. */
   final double[] demandDensity;
   final double[] nextClasses = new double[TreeClass.COUNT];
+
+  /** Names of the arrays {@link #violation()} checks, in the order of {@link #checked}. */
+  private static final String[] CHECKED_NAMES = {"treesPerHa", "leftoverGrassKgPerHa",
+      "abundance", "predatorAbundance", "fuelKgPerHa", "grassProductionKgPerHa",
+      "plannedBurntFraction", "wildBurntFraction", "reach", "plannedIntensityKwPerM",
+      "wildIntensityKwPerM", "basalAreaM2PerHa", "lowBrowseKgPerHa", "highBrowseKgPerHa",
+      "browsePressure", "elephantsPerKm2", "grazedFraction", "tallShare", "grassDiet",
+      "forageKg", "pressureKg", "predationHazard", "preyBiomassKg", "coverageHistory"};
+  /** The state arrays that must stay finite and non-negative. */
+  private final double[][] checked;
 
   /** Allocates every array once for parameters {@code p}. */
   public EcosystemState(ModelParameters p) {
@@ -112,14 +122,19 @@ public final class EcosystemState {
     forageKg = new double[herbivores];
     pressureKg = new double[herbivores];
     predationHazard = new double[herbivores];
-    satisfaction = new double[herbivores];
     categorySupplyKg = new double[blocks * Herbivory.CATEGORIES_PER_BLOCK];
     preyBiomassKg = new double[predators];
+    preyKg = new double[herbivores];
     tallShare = new double[blocks];
     resourceShare = new double[herbivores * blocks * Herbivory.CATEGORIES_PER_BLOCK];
     inverseUsable = new double[blocks * Herbivory.CATEGORIES_PER_BLOCK * herbivores];
     sharedDemandKg = new double[herbivores];
     inverseSupply = new double[blocks * Herbivory.CATEGORIES_PER_BLOCK];
+    checked = new double[][] {treesPerHa, leftoverGrassKgPerHa, abundance, predatorAbundance,
+        fuelKgPerHa, grassProductionKgPerHa, plannedBurntFraction, wildBurntFraction, reach,
+        plannedIntensityKwPerM, wildIntensityKwPerM, basalAreaM2PerHa, lowBrowseKgPerHa,
+        highBrowseKgPerHa, browsePressure, elephantsPerKm2, grazedFraction, tallShare,
+        grassDiet, forageKg, pressureKg, predationHazard, preyBiomassKg, coverageHistory};
     overlap = new double[blocks * Herbivory.CATEGORIES_PER_BLOCK * herbivores * herbivores];
     demandDensity = new double[herbivores * blocks * Herbivory.CATEGORIES_PER_BLOCK];
   }
@@ -163,30 +178,23 @@ public final class EcosystemState {
    * @return null if they hold, else a description of the first violation
    */
   public String violation() {
-    String v = firstBad("treesPerHa", treesPerHa);
-    v = v != null ? v : firstBad("leftoverGrassKgPerHa", leftoverGrassKgPerHa);
-    v = v != null ? v : firstBad("abundance", abundance);
-    v = v != null ? v : firstBad("predatorAbundance", predatorAbundance);
-    v = v != null ? v : firstBad("fuelKgPerHa", fuelKgPerHa);
-    v = v != null ? v : firstBad("grassProductionKgPerHa", grassProductionKgPerHa);
-    v = v != null ? v : firstBad("plannedBurntFraction", plannedBurntFraction);
-    v = v != null ? v : firstBad("wildBurntFraction", wildBurntFraction);
-    v = v != null ? v : firstBad("reach", reach);
-    if (v == null) {
-      double cost = costBurning + costOfftake + costContraception + costWater;
-      if (!(cost >= 0) || Double.isInfinite(cost)) {
-        v = "cost = " + cost;
+    for (int i = 0; i < checked.length; i++) {
+      String bad = firstBad(CHECKED_NAMES[i], checked[i]);
+      if (bad != null) {
+        return bad;
       }
     }
-    if (v == null) {
-      for (int b = 0; b < blocks; b++) {
-        double burnt = plannedBurntFraction[b] + wildBurntFraction[b];
-        if (burnt > 1 + 1e-12) {
-          return "burnt fraction in block " + b + " = " + burnt;
-        }
+    double cost = costBurning + costOfftake + costContraception + costWater;
+    if (!(cost >= 0) || Double.isInfinite(cost)) {
+      return "cost = " + cost;
+    }
+    for (int b = 0; b < blocks; b++) {
+      double burnt = plannedBurntFraction[b] + wildBurntFraction[b];
+      if (burnt > 1 + 1e-12) {
+        return "burnt fraction in block " + b + " = " + burnt;
       }
     }
-    return v;
+    return null;
   }
 
   private static String firstBad(String name, double[] values) {

@@ -1,5 +1,7 @@
 package veldplan.model;
 
+import veldplan.shared.check.Checks;
+
 /**
  * Elephant-specific parameters (their forage and body mass are in {@link HerbivoreParameters}).
  *
@@ -20,4 +22,14 @@ public record ElephantParameters(
     double mortalityPerYear,
     double contraceptionEfficacy,
     int gestationLagYears,
-    double browsePreference) {}
+    double browsePreference) {
+
+  public ElephantParameters {
+    Checks.probability(breedingFemaleFraction, "breedingFemaleFraction");
+    Checks.probability(calvesPerFemalePerYear, "calvesPerFemalePerYear");
+    Checks.probability(mortalityPerYear, "mortalityPerYear");
+    Checks.probability(contraceptionEfficacy, "contraceptionEfficacy");
+    Checks.inRange(gestationLagYears, 0, 10, "gestationLagYears");
+    Checks.strictlyPositive(browsePreference, "browsePreference");
+  }
+}

@@ -56,7 +56,13 @@ public final class Ensemble {
             int path = job / replicates;
             int replicate = job % replicates;
             Trajectory trajectory = new Trajectory(p);
-            simulator.run(plan, study.forcing(path, replicate), state, trajectory);
+            try {
+              simulator.run(plan, study.forcing(path, replicate), state, trajectory);
+            } catch (RuntimeException e) {
+              throw new IllegalStateException(e.getMessage() + " (climate path \""
+                  + study.paths().get(path).name() + "\", replicate " + (replicate + 1)
+                  + ", scenario seed " + study.seed() + ", policy \"" + plan.name() + "\")", e);
+            }
             out[path][replicate] = trajectory;
             progress.runFinished();
           }

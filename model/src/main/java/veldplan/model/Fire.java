@@ -1,5 +1,7 @@
 package veldplan.model;
 
+import veldplan.model.ecology.Trollope;
+
 
 /**
  * Planned burns and unplanned fires on the fuel left after grazing.
@@ -18,8 +20,8 @@ package veldplan.model;
  * regression (methods sheet §8.2) with the season entering through fuel moisture and humidity.
  *
  * <h2>Unplanned fires</h2>
- * Ignitions arrive as a Poisson process whose rate rises with fuel (through the spread factor) and
- * falls when the dry season is short: long growing seasons keep fuel green (a logistic fall in
+ * Ignitions arrive as a Poisson process, in proportion to the block's area, whose rate rises with
+ * fuel (through the spread factor) and falls when the dry season is short: long growing seasons keep fuel green (a logistic fall in
  * growing days). A fire burns a random share of the area the planned burn left, in the late dry
  * season. Calibration targets: a mean fire return interval of about 3–5 years and 10–25 % of a
  * mesic park burnt per year (methods sheet §8.4), and burnt area rising with growing days to
@@ -31,35 +33,36 @@ package veldplan.model;
  * per replicate into the {@link Forcing}.
  */
 final class Fire {
-  /** Fuel-load coefficient of Trollope's regression (kW/m per kg/ha), methods sheet §8.2. */
-  static final double TROLLOPE_FUEL_COEFFICIENT = 0.8684;
-
   private Fire() {}
 
-  static void burn(FireParameters fp, ManagementPlan plan, Forcing f, int year,
+  static void burn(ModelParameters p, ManagementPlan plan, Forcing f, int year,
       EcosystemState s) {
+    FireParameters fp = p.fire();
+    double[] areaKm2 = p.blocks().areaKm2;
+    double wind = fp.windSpeedMPerS();
     int blocks = s.blocks;
     for (int b = 0; b < blocks; b++) {
       int at = year * blocks + b;
       double fuel = s.fuelKgPerHa[b];
       double spread = spreadFactor(fp, fuel);
-      double fuelTerm = TROLLOPE_FUEL_COEFFICIENT * fuel;
       double planned = 0;
       double plannedIntensity = 0;
       if (plan.burnsIn(b, year)) {
-        double offset = plan.lateDrySeason[b] ? f.fireOffsetLateKwPerM[at]
-            : f.fireOffsetEarlyKwPerM[at];
-        plannedIntensity = Math.max(0, offset + fuelTerm);
+        plannedIntensity = plan.lateDrySeason[b]
+            ? Trollope.fireIntensityKwPerM(fuel, f.fuelMoistureLatePercent,
+                f.humidityLatePercent[at], wind)
+            : Trollope.fireIntensityKwPerM(fuel, f.fuelMoistureEarlyPercent,
+                f.humidityEarlyPercent[at], wind);
         // A fire whose Trollope intensity is not positive does not carry.
         planned = plannedIntensity > 0 ? plan.targetFractionBurnt[b] * spread : 0;
       }
-      double rate = fp.wildfireIgnitionsPerYear() * spread * f.curedSeasonFactor[at];
-      double ignition = f.ignitionDraw[at];
-      double extent = f.extentDraw[at];
-      double wildIntensity = Math.max(0, f.fireOffsetLateKwPerM[at] + fuelTerm);
+      double rate = fp.wildfireIgnitionsPer100Km2PerYear() * areaKm2[b] / 100 * spread
+          * f.curedSeasonFactor[at];
+      double wildIntensity = Trollope.fireIntensityKwPerM(fuel, f.fuelMoistureLatePercent,
+          f.humidityLatePercent[at], wind);
       double wild = 0;
-      if (ignition < 1 - Math.exp(-rate) && wildIntensity > 0) {
-        wild = (1 - planned) * spread * (0.3 + 0.7 * extent);
+      if (f.ignitionDraw[at] < 1 - Math.exp(-rate) && wildIntensity > 0) {
+        wild = (1 - planned) * spread * (0.3 + 0.7 * f.extentDraw[at]);
       }
       s.plannedBurntFraction[b] = planned;
       s.plannedIntensityKwPerM[b] = plannedIntensity;

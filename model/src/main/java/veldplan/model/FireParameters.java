@@ -1,5 +1,8 @@
 package veldplan.model;
 
+import veldplan.model.ecology.Topkill;
+import veldplan.shared.check.Checks;
+
 /**
  * Fire sub-model parameters.
  *
@@ -12,8 +15,8 @@ package veldplan.model;
  * @param curingMonths e-folding time of fuel drying after the growing season ends (months)
  * @param minimumFuelKgPerHa fuel below which a fire does not carry (kg DM/ha)
  * @param fuelSpreadScaleKgPerHa scale of the logistic rise of fire spread with fuel (kg DM/ha)
- * @param wildfireIgnitionsPerYear expected unplanned ignitions per block and year with ample cured
- *     fuel and a long dry season
+ * @param wildfireIgnitionsPer100Km2PerYear expected unplanned ignitions per 100 km2 and year
+ *     with ample cured fuel and a long dry season
  * @param curedSeasonMidDays growing days at which the unplanned-fire chance is halved because the
  *     dry season is short (days)
  * @param curedSeasonScaleDays scale of that logistic fall (days)
@@ -29,7 +32,7 @@ public record FireParameters(
     double curingMonths,
     double minimumFuelKgPerHa,
     double fuelSpreadScaleKgPerHa,
-    double wildfireIgnitionsPerYear,
+    double wildfireIgnitionsPer100Km2PerYear,
     double curedSeasonMidDays,
     double curedSeasonScaleDays,
     double topkillIntercept,
@@ -37,13 +40,30 @@ public record FireParameters(
     double topkillSqrtIntensity,
     double topkillDeathFraction) {
 
+  public FireParameters {
+    Checks.strictlyPositive(windSpeedMPerS, "windSpeedMPerS");
+    Checks.inRange(curedFuelMoisturePercent, 0, 300, "curedFuelMoisturePercent");
+    Checks.inRange(greenFuelMoisturePercent, 0, 300, "greenFuelMoisturePercent");
+    Checks.strictlyPositive(curingMonths, "curingMonths");
+    Checks.nonNegative(minimumFuelKgPerHa, "minimumFuelKgPerHa");
+    Checks.strictlyPositive(fuelSpreadScaleKgPerHa, "fuelSpreadScaleKgPerHa");
+    Checks.nonNegative(wildfireIgnitionsPer100Km2PerYear, "wildfireIgnitionsPer100Km2PerYear");
+    Checks.strictlyPositive(curedSeasonScaleDays, "curedSeasonScaleDays");
+    Checks.finite(curedSeasonMidDays, "curedSeasonMidDays");
+    Checks.finite(topkillIntercept, "topkillIntercept");
+    Checks.finite(topkillLnHeight, "topkillLnHeight");
+    Checks.finite(topkillSqrtIntensity, "topkillSqrtIntensity");
+    Checks.probability(topkillDeathFraction, "topkillDeathFraction");
+  }
+
   /**
    * Default values. Topkill: the Skukuza fit of Higgins et al. (2007, Appendix C, Table C2),
    * intensity taken in kW/m (see the units caveat in the methods sheet §8.3). Death of topkilled
    * trees: "a few %" (Higgins et al. 2000, from memory). The rest is our calibration.
    */
   public static FireParameters defaults() {
-    return new FireParameters(2.5, 28, 88, 1.5, 1200, 300, 0.35, 185, 12,
-        1.17, -3.44, 0.038, 0.04);
+    return new FireParameters(2.5, 28, 88, 1.5, 1200, 300, 0.12, 185, 12,
+        Topkill.SKUKUZA.intercept(), Topkill.SKUKUZA.lnHeightCoefficient(),
+        Topkill.SKUKUZA.sqrtIntensityCoefficient(), 0.04);
   }
 }

@@ -25,8 +25,14 @@ public final class Forcing {
   final double[] growingDays;
   final double[] grassPotentialKgPerHa;
   final double[] treeGrowthIndex;
-  final double[] fireOffsetEarlyKwPerM;
-  final double[] fireOffsetLateKwPerM;
+  /** Afternoon relative humidity in the early-dry burning month (%). */
+  final double[] humidityEarlyPercent;
+  /** Afternoon relative humidity in the late-dry burning month (%). */
+  final double[] humidityLatePercent;
+  /** Grass fuel moisture in the early-dry burning month (%). */
+  final double fuelMoistureEarlyPercent;
+  /** Grass fuel moisture in the late-dry burning month (%). */
+  final double fuelMoistureLatePercent;
   final double[] co2Ppm;
   /** Chance-of-unplanned-fire factor from the length of the dry season (0..1). */
   final double[] curedSeasonFactor;
@@ -40,7 +46,7 @@ public final class Forcing {
   final double[] demographicNoise;
 
   Forcing(int years, int blocks, int noiseSlots, long fireKey, long demographyKey,
-      double[] co2Ppm) {
+      double[] co2Ppm, double fuelMoistureEarlyPercent, double fuelMoistureLatePercent) {
     this.years = years;
     this.blocks = blocks;
     this.fireKey = fireKey;
@@ -53,8 +59,10 @@ public final class Forcing {
     this.growingDays = new double[n];
     this.grassPotentialKgPerHa = new double[n];
     this.treeGrowthIndex = new double[n];
-    this.fireOffsetEarlyKwPerM = new double[n];
-    this.fireOffsetLateKwPerM = new double[n];
+    this.humidityEarlyPercent = new double[n];
+    this.humidityLatePercent = new double[n];
+    this.fuelMoistureEarlyPercent = fuelMoistureEarlyPercent;
+    this.fuelMoistureLatePercent = fuelMoistureLatePercent;
     this.co2Ppm = co2Ppm.clone();
     this.curedSeasonFactor = new double[n];
     this.ignitionDraw = new double[n];
@@ -118,14 +126,14 @@ public final class Forcing {
     return treeGrowthIndex[year * blocks + block];
   }
 
-  /** Trollope fire intensity without the fuel term, early dry season (kW/m). */
-  public double fireOffsetEarlyKwPerM(int year, int block) {
-    return fireOffsetEarlyKwPerM[year * blocks + block];
+  /** Afternoon relative humidity in the early-dry burning month (%). */
+  public double humidityEarlyPercent(int year, int block) {
+    return humidityEarlyPercent[year * blocks + block];
   }
 
-  /** Trollope fire intensity without the fuel term, late dry season (kW/m). */
-  public double fireOffsetLateKwPerM(int year, int block) {
-    return fireOffsetLateKwPerM[year * blocks + block];
+  /** Afternoon relative humidity in the late-dry burning month (%). */
+  public double humidityLatePercent(int year, int block) {
+    return humidityLatePercent[year * blocks + block];
   }
 
   /** CO2 in the year (ppm). */

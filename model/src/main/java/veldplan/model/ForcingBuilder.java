@@ -42,7 +42,7 @@ import veldplan.shared.rng.CounterRandom;
  * For the early- and late-dry-season burning months, relative humidity at the afternoon maximum
  * temperature from Linacre's dew point and the FAO-56 saturation vapour pressure (Eq. 11), and
  * fuel moisture drying from the green value to the cured value with months since the growing
- * season ended; these give all terms of the Trollope regression except fuel load.
+ * season ended; with fuel load and wind these are the inputs of the Trollope regression.
  */
 public final class ForcingBuilder {
   private static final int[] DAYS = {31, 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31};
@@ -150,7 +150,12 @@ public final class ForcingBuilder {
       co2[y] = weather.co2Ppm(y);
     }
     int noiseSlots = p.herbivores().count + p.predators().count;
-    Forcing out = new Forcing(years, blocks, noiseSlots, fireKey, demographyKey, co2);
+    double moistureEarly = f.curedFuelMoisturePercent() + (f.greenFuelMoisturePercent()
+        - f.curedFuelMoisturePercent()) * Math.exp(-fireSeasons[2] / f.curingMonths());
+    double moistureLate = f.curedFuelMoisturePercent() + (f.greenFuelMoisturePercent()
+        - f.curedFuelMoisturePercent()) * Math.exp(-fireSeasons[3] / f.curingMonths());
+    Forcing out = new Forcing(years, blocks, noiseSlots, fireKey, demographyKey, co2,
+        moistureEarly, moistureLate);
     for (int y = 0; y < years; y++) {
       for (int slot = 0; slot < noiseSlots; slot++) {
         out.demographicNoise[y * noiseSlots + slot] =
@@ -165,14 +170,10 @@ public final class ForcingBuilder {
     double[] pet = new double[12];
     double[] meanT = new double[12];
     double[] range = new double[12];
-    double moistureEarly = f.curedFuelMoisturePercent() + (f.greenFuelMoisturePercent()
-        - f.curedFuelMoisturePercent()) * Math.exp(-fireSeasons[2] / f.curingMonths());
-    double moistureLate = f.curedFuelMoisturePercent() + (f.greenFuelMoisturePercent()
-        - f.curedFuelMoisturePercent()) * Math.exp(-fireSeasons[3] / f.curingMonths());
-    double windTerm = 596 / Math.max(0.5, f.windSpeedMPerS());
     for (int b = 0; b < blocks; b++) {
       double capacity = bp.bucketCapacityMm[b];
       double storage = INITIAL_BUCKET_FILL * capacity;
+      double surfaceWater = 0;
       for (int y = 0; y < years; y++) {
         double hottest = -1e9;
         double coldest = 1e9;
@@ -193,8 +194,8 @@ public final class ForcingBuilder {
         for (int m = 0; m < 12; m++) {
           double depression = Linacre.clampedDewPointDepressionC(bp.altitudeM[b], meanT[m],
               range[m], annualRange);
-          pet[m] = DAYS[m] * Linacre.wellWateredEvapotranspirationMmPerDay(meanT[m],
-              bp.altitudeM[b], bp.latitudeDeg[b], depression);
+          pet[m] = monthlyPet(meanT[m], range[m], annualRange, bp.altitudeM[b],
+              bp.latitudeDeg[b], m);
           e0Sum += DAYS[m] * Linacre.openWaterEvaporationMmPerDay(meanT[m], bp.altitudeM[b],
               bp.latitudeDeg[b], depression);
           // Daily steps within the month: the month's rain falls in equal storms of about
@@ -207,7 +208,6 @@ public final class ForcingBuilder {
           storms = Math.min(storms, days);
           double stormMm = storms > 0 ? rain[m] / storms : 0;
           int firstStormDay = (days - storms) / 2;
-          double surfaceWater = 0;
           double surface = 0;
           double transpiration = 0;
           for (int day = 0; day < days; day++) {
@@ -246,29 +246,27 @@ public final class ForcingBuilder {
         out.curedSeasonFactor[at] = Fire.curedSeasonFactor(f, out.growingDays[at]);
         out.grassPotentialKgPerHa[at] = grassWater * g.waterUseEfficiencyKgPerHaPerMm() * c4;
         out.treeGrowthIndex[at] = treeWater * c3 / t.referenceAetMm;
-        out.fireOffsetEarlyKwPerM[at] = fireOffset(weather, y, fireSeasons[0], bp.altitudeM[b],
-            annualRange, moistureEarly, windTerm);
-        out.fireOffsetLateKwPerM[at] = fireOffset(weather, y, fireSeasons[1], bp.altitudeM[b],
-            annualRange, moistureLate, windTerm);
+        out.humidityEarlyPercent[at] = afternoonHumidityPercent(weather, y, fireSeasons[0],
+            bp.altitudeM[b], annualRange);
+        out.humidityLatePercent[at] = afternoonHumidityPercent(weather, y, fireSeasons[1],
+            bp.altitudeM[b], annualRange);
       }
     }
     return out;
   }
 
   /**
-   * Trollope's fire-intensity regression without its fuel term (kW/m):
-   * 2729 - 530 sqrt(FM) - 0.1907 RH^2 - 596 / W (methods sheet §8.2).
+   * Relative humidity at the afternoon maximum temperature of a month (%): the dew point from
+   * Linacre's (1977) regression, vapour pressures from FAO-56 Eq. 11.
    */
-  private static double fireOffset(Weather weather, int year, int month0, double altitudeM,
-      double annualRangeC, double fuelMoisturePercent, double windTerm) {
+  private static double afternoonHumidityPercent(Weather weather, int year, int month0,
+      double altitudeM, double annualRangeC) {
     double tmax = weather.tmaxC(year, month0);
     double tmin = weather.tminC(year, month0);
     double mean = 0.5 * (tmax + tmin);
     double depression =
         Linacre.clampedDewPointDepressionC(altitudeM, mean, tmax - tmin, annualRangeC);
-    double dewPoint = mean - depression;
-    double rh = 100 * Math.min(1, saturationVapourPressureKPa(dewPoint)
+    return 100 * Math.min(1, saturationVapourPressureKPa(mean - depression)
         / saturationVapourPressureKPa(tmax));
-    return 2729 - 530 * Math.sqrt(fuelMoisturePercent) - 0.1907 * rh * rh - windTerm;
   }
 }

@@ -1,5 +1,7 @@
 package veldplan.model;
 
+import veldplan.model.ecology.TreeGrassCompetition;
+
 /**
  * Grass production and standing fuel.
  *
@@ -21,8 +23,8 @@ final class Grass {
         basalArea += s.treesPerHa[trees + k] * t.basalAreaM2PerTree[k];
       }
       s.basalAreaM2PerHa[b] = basalArea;
-      double production = f.grassPotentialKgPerHa[year * blocks + b]
-          * Math.exp(-g.treeSuppressionHaPerM2() * basalArea);
+      double production = TreeGrassCompetition.negativeExponential(
+          f.grassPotentialKgPerHa[year * blocks + b], g.treeSuppressionHaPerM2(), basalArea);
       s.grassProductionKgPerHa[b] = production;
       s.fuelKgPerHa[b] = Math.min(g.maxFuelKgPerHa(),
           production + g.carryOverFraction() * s.leftoverGrassKgPerHa[b]);

@@ -1,5 +1,7 @@
 package veldplan.model;
 
+import veldplan.shared.check.Checks;
+
 /**
  * Grass sub-model parameters.
  *
@@ -42,6 +44,22 @@ public record GrassParameters(
     double c4ToptC,
     double c4TmaxC,
     double c4Co2Share) {
+
+  public GrassParameters {
+    Checks.strictlyPositive(waterUseEfficiencyKgPerHaPerMm, "waterUseEfficiencyKgPerHaPerMm");
+    Checks.nonNegative(treeSuppressionHaPerM2, "treeSuppressionHaPerM2");
+    Checks.probability(carryOverFraction, "carryOverFraction");
+    Checks.strictlyPositive(maxFuelKgPerHa, "maxFuelKgPerHa");
+    Checks.probability(properUseFraction, "properUseFraction");
+    Checks.probability(browseUseFraction, "browseUseFraction");
+    Checks.probability(tallGrassMaxShare, "tallGrassMaxShare");
+    Checks.probability(grazingLawnEffect, "grazingLawnEffect");
+    if (!(c4TminC < c4ToptC && c4ToptC < c4TmaxC)) {
+      throw new IllegalArgumentException("C4 cardinal temperatures not ordered: " + c4TminC
+          + ", " + c4ToptC + ", " + c4TmaxC);
+    }
+    Checks.nonNegative(c4Co2Share, "c4Co2Share");
+  }
 
   /**
    * Default values. Cardinal temperatures: generic C4 tropical grass 8–12 / 30–35 / 42–45 °C

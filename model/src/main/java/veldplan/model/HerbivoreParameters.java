@@ -31,8 +31,6 @@ public final class HerbivoreParameters {
    * the order tall grass, short grass, low browse, high browse ({@link Herbivory}).
    */
   final double[] acceptance;
-  /** 1 / acceptance, 0 where nothing is accepted. */
-  final double[] inverseAcceptance;
   /** theta = max(1, sqrt(W / 450)): shape of density dependence (theta-Ricker), see Animals. */
   final double[] densityShape;
   /** Intake from forage shared with others, intake / coarse-forage factor (kg DM/yr). */
@@ -61,10 +59,6 @@ public final class HerbivoreParameters {
           + " values per herbivore");
     }
     this.acceptance = acceptance.clone();
-    this.inverseAcceptance = new double[acceptance.length];
-    for (int i = 0; i < acceptance.length; i++) {
-      inverseAcceptance[i] = acceptance[i] > 0 ? 1 / acceptance[i] : 0;
-    }
     this.coarseForageFactor = new double[count];
     this.densityShape = new double[count];
     this.sharedIntakeKgPerYear = new double[count];
@@ -98,6 +92,11 @@ public final class HerbivoreParameters {
   /** Body mass of herbivore {@code h} (kg). */
   public double bodyMassKg(int h) {
     return bodyMassKg[h];
+  }
+
+  /** Feeding role of guild {@code h} (ordinal of GuildRole), or -1 for the elephants. */
+  public int role(int h) {
+    return role[h];
   }
 
   /** Maximum rate of increase of herbivore {@code h} (1/yr). */

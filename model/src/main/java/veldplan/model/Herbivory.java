@@ -29,6 +29,8 @@ import veldplan.model.ecology.WaterCoverage;
  * §9.2). A herbivore heavier than a 450 kg large stock unit takes only 1 / f of its intake from
  * the forage the others use, f = (W / 450)^0.25, and the rest from the stems, bark and coarse
  * grass others leave; both its own depletion and the depletion it causes others use that share.
+ * That coarse material is a pool the model does not track: eating it takes nothing from the
+ * fuel or the browse (a simplification).
  *
  * <h2>Sharing</h2>
  * Resources are (block, tall grass|short grass|low browse|high browse) categories. Each
@@ -138,14 +140,16 @@ final class Herbivory {
     // Elephants' diet: browse preferred over grass in proportion to what they accept in reach.
     int e = hp.elephant;
     int ea = e * CATEGORIES_PER_BLOCK;
+    double grassUse = p.grass().properUseFraction();
+    double browseUse = p.grass().browseUseFraction();
     double grassReach = 0;
     double browseReach = 0;
     for (int b = 0; b < blocks; b++) {
       double area = bp.areaHa[b] * s.reach[e * blocks + b];
       double tall = s.tallShare[b];
-      grassReach += area * s.grassProductionKgPerHa[b]
+      grassReach += area * grassUse * s.grassProductionKgPerHa[b]
           * (accept[ea + TALL] * tall + accept[ea + SHORT] * (1 - tall));
-      browseReach += area * (accept[ea + LOW_BROWSE] * s.lowBrowseKgPerHa[b]
+      browseReach += area * browseUse * (accept[ea + LOW_BROWSE] * s.lowBrowseKgPerHa[b]
           + accept[ea + HIGH_BROWSE] * s.highBrowseKgPerHa[b]);
     }
     double preference = p.elephants().browsePreference();
@@ -254,7 +258,6 @@ final class Herbivory {
       int row = h * categories;
       double demand = sharedDemand[h];
       double pressure = 0;
-      double satisfied = 0;
       for (int k = 0; k < categories; k++) {
         double used = share[row + k];
         if (used == 0) {
@@ -270,7 +273,6 @@ final class Herbivory {
         pressure += used * depletion;
         // Share of its demand met here: all of it unless the category is over-used.
         double got = depletion > 1 ? used / depletion : used;
-        satisfied += got;
         int b = k / CATEGORIES_PER_BLOCK;
         int c = k - b * CATEGORIES_PER_BLOCK;
         if (c < LOW_BROWSE) {
@@ -283,7 +285,6 @@ final class Herbivory {
         }
       }
       s.pressureKg[h] = pressure * s.forageKg[h];
-      s.satisfaction[h] = satisfied;
     }
     for (int b = 0; b < blocks; b++) {
       // Eaten kg/ha for now; eat() turns both into shares of what there was.

@@ -93,8 +93,17 @@ public final class ParametersFromScenario {
     double[] trees = new double[nb * TreeClass.COUNT];
     for (int b = 0; b < nb; b++) {
       BurnBlock block = blocks.get(b);
-      SoilWaterCharacteristics soil = SaxtonRawls.of(block.sandFraction(), block.clayFraction(),
-          block.organicMatterPercent());
+      SoilWaterCharacteristics soil;
+      try {
+        soil = SaxtonRawls.of(block.sandFraction(), block.clayFraction(),
+            block.organicMatterPercent());
+      } catch (IllegalArgumentException e) {
+        throw new IllegalArgumentException("/park/blocks/" + b + ": sand "
+            + block.sandFraction() + ", clay " + block.clayFraction() + " and organic matter "
+            + block.organicMatterPercent() + " % give no usable soil water contents in the "
+            + "Saxton & Rawls (2006) equations (" + e.getMessage() + "); expected a texture "
+            + "they cover, e.g. a little more clay or organic matter", e);
+      }
       names[b] = block.name();
       area[b] = block.areaHa();
       bucket[b] = 1000 * soil.availableWater() * block.rootingDepthM();
@@ -157,8 +166,9 @@ public final class ParametersFromScenario {
     mass[e] = el.bodyMassKg();
     grassDiet[e] = 0.5;
     reach[e] = el.maxDistanceFromWaterKm();
-    rate[e] = Math.log(1 + el.breedingFemaleFraction() * el.calvesPerFemalePerYear()
-        - el.mortalityPerYear());
+    // The elephants' rate of increase without contraception, from their demography.
+    rate[e] = Math.log(Math.max(1e-9, 1 + el.breedingFemaleFraction()
+        * el.calvesPerFemalePerYear() - el.mortalityPerYear()));
     noise[e] = el.environmentalNoiseSd();
     initial[e] = el.initialAbundance();
     threshold[e] = el.quasiExtinctionAbundance();
@@ -187,6 +197,7 @@ public final class ParametersFromScenario {
     double[] initial = new double[n];
     double[] threshold = new double[n];
     double[] hunts = new double[n * herbivores];
+    int[] responseType = new int[n];
     List<String> guildNames = new ArrayList<>();
     sc.guilds().forEach(g -> guildNames.add(g.name()));
     for (int q = 0; q < n; q++) {
@@ -203,6 +214,7 @@ public final class ParametersFromScenario {
       noise[q] = pr.environmentalNoiseSd();
       initial[q] = pr.initialAbundance();
       threshold[q] = pr.quasiExtinctionAbundance();
+      responseType[q] = pr.functionalResponseType() == null ? 2 : pr.functionalResponseType();
       for (String prey : pr.preyGuilds()) {
         int h = guildNames.indexOf(prey);
         if (h < 0) {
@@ -212,8 +224,12 @@ public final class ParametersFromScenario {
         hunts[q * herbivores + h] = 1;
       }
     }
+    double parkKm2 = 0;
+    for (BurnBlock block : sc.park().blocks()) {
+      parkKm2 += block.areaHa() / 100;
+    }
     return new PredatorParameters(names, mass, kill, half, rate, switching, noise, initial,
-        threshold, hunts);
+        threshold, hunts, responseType, parkKm2);
   }
 
   /** The baseline climate of a loaded scenario. */

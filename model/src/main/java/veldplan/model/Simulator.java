@@ -1,5 +1,7 @@
 package veldplan.model;
 
+import veldplan.model.ecology.Discounting;
+
 /**
  * Runs the park model: one replicate of one policy under one climate path at a time. The only
  * public entry point of the model.
@@ -19,7 +21,7 @@ public final class Simulator {
     double rate = params.costs().discountRatePercent() / 100;
     for (int year = 0; year < params.years(); year++) {
       // Costs fall at the end of the year: PV = C / (1 + i)^t, t = year + 1 (methods sheet §12.2).
-      discountFactor[year] = Math.pow(1 + rate, -(year + 1));
+      discountFactor[year] = Discounting.presentValue(1, rate, year + 1);
     }
   }
 
@@ -33,7 +35,7 @@ public final class Simulator {
    * nothing.
    *
    * @throws IllegalStateException if the state becomes non-finite or negative (a model bug); the
-   *     message names the year and the variable
+   *     message names the process, the calendar year and the variable
    */
   public void run(ManagementPlan plan, Forcing forcing, EcosystemState state, Trajectory out) {
     if (plan.blocks() != params.blocks().count) {
@@ -46,9 +48,28 @@ public final class Simulator {
       AnnualCycle.advance(params, plan, forcing, year, state);
       out.record(year, state, forcing, discountFactor[year]);
     }
-    String problem = state.violation();
-    if (problem != null) {
-      throw new IllegalStateException("model state invalid at the end of the run: " + problem);
+    if (state.violation() != null) {
+      throw new IllegalStateException(diagnose(plan, forcing, state));
     }
+  }
+
+  /**
+   * Runs the replicate again, checking the state after every process, and says where it first
+   * went wrong. Only called after a failed run, so the normal run pays nothing for it.
+   */
+  private String diagnose(ManagementPlan plan, Forcing forcing, EcosystemState state) {
+    state.reset(params);
+    for (int year = 0; year < params.years(); year++) {
+      state.year = year;
+      for (int process = 0; process < AnnualCycle.PROCESSES.length; process++) {
+        AnnualCycle.step(process, params, plan, forcing, year, state);
+        String problem = state.violation();
+        if (problem != null) {
+          return "model state invalid after " + AnnualCycle.PROCESSES[process] + " in year "
+              + (params.startYear() + year) + ": " + problem;
+        }
+      }
+    }
+    return "model state invalid at the end of the run: " + state.violation();
   }
 }

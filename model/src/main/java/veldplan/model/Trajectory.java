@@ -144,6 +144,8 @@ public final class Trajectory {
       int at = (year * blocks + b) * nb;
       int fa = year * blocks + b;
       block[at + BlockSeries.RAINFALL.ordinal()] = f.rainfallMm[fa];
+      block[at + BlockSeries.POTENTIAL_EVAPOTRANSPIRATION.ordinal()] = f.petMm[fa];
+      block[at + BlockSeries.OPEN_WATER_EVAPORATION.ordinal()] = f.openWaterEvaporationMm[fa];
       block[at + BlockSeries.ACTUAL_EVAPOTRANSPIRATION.ordinal()] = f.aetMm[fa];
       block[at + BlockSeries.GROWING_DAYS.ordinal()] = f.growingDays[fa];
       block[at + BlockSeries.GRASS_PRODUCTION.ordinal()] = s.grassProductionKgPerHa[b];

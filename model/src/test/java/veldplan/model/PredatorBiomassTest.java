@@ -2,16 +2,26 @@ package veldplan.model;
 
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.util.List;
 import org.junit.jupiter.api.Test;
+import veldplan.shared.scenario.Predator;
 
-/** Predator numbers against Carbone &amp; Gittleman (2002). */
+/**
+ * Consistency check [D]: predator numbers settle near the capacity the model gives them. That
+ * capacity is the Carbone &amp; Gittleman (2002) ratio itself ({@code Animals.breedAndDie}), so
+ * this is not an outside validation of the ratio: it checks that the dynamics (hunting, prey
+ * growth, slow predator growth) converge near the target the model was built to approach.
+ */
 class PredatorBiomassTest {
 
   @Test
-  void predators_longRunWithoutNoise_biomassNearOnePercentOfTheirPrey() {
-    // Carbone & Gittleman (2002, Science 295: 2273-2276) [V, abstract]: 10,000 kg of prey
-    // support about 90 kg of a carnivore species (0.9 %). The methods sheet (§10.3) sets the
-    // calibration check at the order of magnitude, 0.3-3 % of the prey it hunts.
+  void predators_longRunWithoutNoise_settleNearTheirCarboneGittlemanCapacity() {
+    // [D] consistency, not evidence: the model's predator capacity is 90.1 kg of predator per
+    // 10,000 kg of the prey it hunts (Carbone & Gittleman 2002, Science 295: 2273-2276 [V,
+    // abstract], methods sheet §10.3; the constant 90.1 is from memory), i.e. 0.9 % of prey
+    // biomass whatever the predator's mass. At equilibrium the ratio would be 0.9 %; the band
+    // 0.3-3 % is the order-of-magnitude band of the methods sheet §10.3 and allows for the
+    // dynamics still moving after 60 years and for predation feeding back on the prey.
     TestParks park = new TestParks();
     park.noiseSd = 0;
     park.replicates = 1;
@@ -19,15 +29,23 @@ class PredatorBiomassTest {
     park.predatorsPerGuild = 5;
     Trajectory t = park.run()[0];
     ModelParameters p = park.parameters();
+    Predator predator = park.scenario().predators().get(0);
+    double predatorMassKg = predator.bodyMassKg();
+    List<String> prey = predator.preyGuilds();
     double predatorKg = 0;
     double preyKg = 0;
     int years = 20;
-    for (int y = 80 - years; y < 80; y++) {
-      predatorKg += t.predatorAbundance(y, 0) * 150; // the builder's predator mass
-      for (int h : new int[] {0, 1, 3}) { // the guilds it hunts
-        preyKg += t.abundance(y, h) * p.herbivores().bodyMassKg(h);
+    int hunted = 0;
+    for (int y = park.years - years; y < park.years; y++) {
+      predatorKg += t.predatorAbundance(y, 0) * predatorMassKg;
+      for (int h = 0; h < p.herbivores().count(); h++) {
+        if (prey.contains(p.herbivores().name(h))) {
+          preyKg += t.abundance(y, h) * p.herbivores().bodyMassKg(h);
+          hunted++;
+        }
       }
     }
+    assertTrue(hunted == years * prey.size(), "prey guilds " + prey + " not all found");
     double ratio = predatorKg / preyKg;
     assertTrue(ratio > 0.003 && ratio < 0.03,
         "predator biomass " + predatorKg / years + " kg, prey " + preyKg / years

@@ -11,11 +11,22 @@ import org.junit.jupiter.params.provider.MethodSource;
 /**
  * After every process of every year, under extreme inputs and over many seeds, all state stays
  * finite and non-negative and burnt fractions stay within the block.
+ *
+ * <p>Besides extreme climates, the cases cover extreme parks: elephant deaths at or above births
+ * (so the food term has no positive rate to scale), no water at all (so water-dependent guilds
+ * and elephants have no forage within reach), no predators, and the last two together.
  */
 class ProcessInvariantsTest {
 
   enum Extreme {
-    NO_RAIN, RAIN_3000_MM, HOT_45_C, CO2_1000_PPM, EVERYTHING_AT_ONCE
+    NO_RAIN, RAIN_3000_MM, HOT_45_C, CO2_1000_PPM, EVERYTHING_AT_ONCE,
+    /** Mortality 0.2 against the builder's 0.3 x 0.25 = 0.075 births per elephant a year. */
+    ELEPHANT_DEATHS_EXCEED_BIRTHS,
+    /** No artificial water point and no perennial river: no forage within reach of water. */
+    NO_WATER,
+    NO_PREDATORS,
+    /** No forage for elephants while their deaths exceed births. */
+    NO_WATER_AND_ELEPHANT_DEATHS_EXCEED_BIRTHS
   }
 
   static Stream<Arguments> cases() {
@@ -50,6 +61,17 @@ class ProcessInvariantsTest {
         park.tminC = 30;
         park.co2Ppm = 1000;
         park.treesPerHa = new double[] {20000, 8000, 3000, 900, 400};
+      }
+      case ELEPHANT_DEATHS_EXCEED_BIRTHS -> park.elephantMortality = 0.2;
+      case NO_WATER -> {
+        park.waterPoints = 0;
+        park.riverKm = 0;
+      }
+      case NO_PREDATORS -> park.withPredators = false;
+      case NO_WATER_AND_ELEPHANT_DEATHS_EXCEED_BIRTHS -> {
+        park.waterPoints = 0;
+        park.riverKm = 0;
+        park.elephantMortality = 0.2;
       }
       default -> throw new IllegalStateException();
     }

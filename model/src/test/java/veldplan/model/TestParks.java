@@ -104,7 +104,7 @@ final class TestParks {
             noiseSd));
     List<Predator> predators = withPredators
         ? List.of(new Predator("cats", 150, predatorsPerGuild, 0,
-            List.of("grazers", "rare", "mixed"), null, noiseSd))
+            List.of("grazers", "rare", "mixed"), null, noiseSd, null))
         : List.of();
     Policy policy = new Policy("test", burning,
         new ElephantPlan(offtake, contraception, triggerDensity), water);

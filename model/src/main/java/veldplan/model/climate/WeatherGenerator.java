@@ -26,14 +26,14 @@ public final class WeatherGenerator {
    */
   public static Weather generate(BaselineClimate baseline, ClimatePathModel path,
       double variabilityFactor, long weatherKey) {
-    int years = path.years();
-    double[] rain = new double[years * 12];
-    double[] tmin = new double[years * 12];
-    double[] tmax = new double[years * 12];
     if (path.isExplicit()) {
       return new Weather(path.explicitRainfallMm, path.explicitTminC, path.explicitTmaxC,
           path.co2Ppm);
     }
+    int years = path.years();
+    double[] rain = new double[years * 12];
+    double[] tmin = new double[years * 12];
+    double[] tmax = new double[years * 12];
     double mean = baseline.meanAnnualRainfallMm;
     for (int year = 0; year < years; year++) {
       int drawn = (int) (CounterRandom.uniform(weatherKey, year, 0) * baseline.years);

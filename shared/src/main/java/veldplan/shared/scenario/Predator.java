@@ -14,6 +14,8 @@ import java.util.List;
  *                                 (1 = no switching); absent = 2, the value commonly used
  *                                 (Murdoch 1969 form)
  * @param environmentalNoiseSd     SD of the yearly log growth rate from environmental noise
+ * @param functionalResponseType   Holling type of the kill rate's response to prey density: 2
+ *                                 (saturating) or 3 (sigmoid, prey scarce are spared); absent = 2
  */
 public record Predator(
     String name,
@@ -22,7 +24,8 @@ public record Predator(
     @Range(min = 0, max = 1e5, unit = "head") double quasiExtinctionAbundance,
     List<String> preyGuilds,
     @Optional @Range(min = 1, max = 4, unit = "dimensionless") Double switchingExponent,
-    @Range(min = 0, max = 2, unit = "log-scale SD per year") double environmentalNoiseSd) {
+    @Range(min = 0, max = 2, unit = "log-scale SD per year") double environmentalNoiseSd,
+    @Optional @Range(min = 2, max = 3, unit = "Holling type") Integer functionalResponseType) {
 
   public Predator {
     preyGuilds = List.copyOf(preyGuilds);
