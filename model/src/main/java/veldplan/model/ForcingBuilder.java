@@ -62,13 +62,12 @@ public final class ForcingBuilder {
   private ForcingBuilder() {}
 
   /**
-   * The dry-season months in which early and late planned burns are lit, from the baseline
-   * climatology: the first and the last month of the longest run of months in which mean
-   * rainfall is below half of PET (FAO 1978's start/end criterion).
-   *
-   * @return {early month0, late month0, months since growing season ended at early, at late}
+   * The park's seasons from the baseline climatology. Early and late planned burns are lit in
+   * the first and the last month of the longest run of months in which mean rainfall is below
+   * half of PET (FAO 1978's start/end criterion); the model year starts the month after the late
+   * burns, with the rains.
    */
-  public static int[] fireSeasonMonths(BaselineClimate baseline, double altitudeM,
+  public static Seasons seasons(BaselineClimate baseline, double altitudeM,
       double latitudeDeg) {
     boolean[] dry = new boolean[12];
     double hottest = -1e9;
@@ -108,11 +107,11 @@ public final class ForcingBuilder {
           driest = m;
         }
       }
-      boolean allDry = dry[0];
-      return new int[] {driest, driest, allDry ? 12 : 1, allDry ? 12 : 1};
+      int cured = dry[0] ? 12 : 1;
+      return new Seasons((driest + 1) % 12, driest, driest, cured, cured);
     }
     int late = (bestStart + bestLength - 1) % 12;
-    return new int[] {bestStart, late, 1, bestLength};
+    return new Seasons((late + 1) % 12, bestStart, late, 1, bestLength);
   }
 
   static double monthlyPet(double meanTempC, double dailyRangeC, double annualRangeC,
@@ -133,11 +132,11 @@ public final class ForcingBuilder {
    *
    * @param p             model parameters
    * @param weather       the replicate's park weather
-   * @param fireSeasons   from {@link #fireSeasonMonths}
+   * @param seasons       the park's seasons, from {@link #seasons}
    * @param fireKey       fire stream key
    * @param demographyKey demography stream key
    */
-  public static Forcing build(ModelParameters p, Weather weather, int[] fireSeasons,
+  public static Forcing build(ModelParameters p, Weather weather, Seasons seasons,
       long fireKey, long demographyKey) {
     BlockParameters bp = p.blocks();
     GrassParameters g = p.grass();
@@ -151,9 +150,9 @@ public final class ForcingBuilder {
     }
     int noiseSlots = p.herbivores().count + p.predators().count;
     double moistureEarly = f.curedFuelMoisturePercent() + (f.greenFuelMoisturePercent()
-        - f.curedFuelMoisturePercent()) * Math.exp(-fireSeasons[2] / f.curingMonths());
+        - f.curedFuelMoisturePercent()) * Math.exp(-seasons.curedMonthsEarly() / f.curingMonths());
     double moistureLate = f.curedFuelMoisturePercent() + (f.greenFuelMoisturePercent()
-        - f.curedFuelMoisturePercent()) * Math.exp(-fireSeasons[3] / f.curingMonths());
+        - f.curedFuelMoisturePercent()) * Math.exp(-seasons.curedMonthsLate() / f.curingMonths());
     Forcing out = new Forcing(years, blocks, noiseSlots, fireKey, demographyKey, co2,
         moistureEarly, moistureLate);
     for (int y = 0; y < years; y++) {
@@ -194,15 +193,16 @@ public final class ForcingBuilder {
         for (int m = 0; m < 12; m++) {
           double depression = Linacre.clampedDewPointDepressionC(bp.altitudeM[b], meanT[m],
               range[m], annualRange);
+          int calendarMonth = seasons.calendarMonth(m);
           pet[m] = monthlyPet(meanT[m], range[m], annualRange, bp.altitudeM[b],
-              bp.latitudeDeg[b], m);
-          e0Sum += DAYS[m] * Linacre.openWaterEvaporationMmPerDay(meanT[m], bp.altitudeM[b],
+              bp.latitudeDeg[b], calendarMonth);
+          e0Sum += DAYS[calendarMonth] * Linacre.openWaterEvaporationMmPerDay(meanT[m], bp.altitudeM[b],
               bp.latitudeDeg[b], depression);
           // Daily steps within the month: the month's rain falls in equal storms of about
           // STORM_DEPTH_MM on consecutive days, one wet spell in mid-month. Each storm wets the
           // surface layer, whose readily evaporable water dries at the day's demand before
           // roots get it; the rest infiltrates into the bucket, and what overfills it drains.
-          int days = DAYS[m];
+          int days = DAYS[calendarMonth];
           double petDay = pet[m] / days;
           int storms = rain[m] > 0 ? (int) Math.ceil(rain[m] / STORM_DEPTH_MM) : 0;
           storms = Math.min(storms, days);
@@ -246,10 +246,10 @@ public final class ForcingBuilder {
         out.curedSeasonFactor[at] = Fire.curedSeasonFactor(f, out.growingDays[at]);
         out.grassPotentialKgPerHa[at] = grassWater * g.waterUseEfficiencyKgPerHaPerMm() * c4;
         out.treeGrowthIndex[at] = treeWater * c3 / t.referenceAetMm;
-        out.humidityEarlyPercent[at] = afternoonHumidityPercent(weather, y, fireSeasons[0],
-            bp.altitudeM[b], annualRange);
-        out.humidityLatePercent[at] = afternoonHumidityPercent(weather, y, fireSeasons[1],
-            bp.altitudeM[b], annualRange);
+        out.humidityEarlyPercent[at] = afternoonHumidityPercent(weather, y,
+            seasons.indexInYear(seasons.earlyBurnMonth()), bp.altitudeM[b], annualRange);
+        out.humidityLatePercent[at] = afternoonHumidityPercent(weather, y,
+            seasons.indexInYear(seasons.lateBurnMonth()), bp.altitudeM[b], annualRange);
       }
     }
     return out;
@@ -259,10 +259,10 @@ public final class ForcingBuilder {
    * Relative humidity at the afternoon maximum temperature of a month (%): the dew point from
    * Linacre's (1977) regression, vapour pressures from FAO-56 Eq. 11.
    */
-  private static double afternoonHumidityPercent(Weather weather, int year, int month0,
+  private static double afternoonHumidityPercent(Weather weather, int year, int monthOfYear,
       double altitudeM, double annualRangeC) {
-    double tmax = weather.tmaxC(year, month0);
-    double tmin = weather.tminC(year, month0);
+    double tmax = weather.tmaxC(year, monthOfYear);
+    double tmin = weather.tminC(year, monthOfYear);
     double mean = 0.5 * (tmax + tmin);
     double depression =
         Linacre.clampedDewPointDepressionC(altitudeM, mean, tmax - tmin, annualRangeC);

@@ -335,7 +335,7 @@ public final class ParametersFromScenario {
     }
     BaselineClimate baseline = baseline(loaded.baseline());
     BurnBlock reference = sc.park().blocks().get(0);
-    int[] seasons = ForcingBuilder.fireSeasonMonths(baseline, reference.altitudeM(),
+    Seasons seasons = ForcingBuilder.seasons(baseline, reference.altitudeM(),
         reference.latitudeDeg());
     return new Study(params, baseline, paths, sc.stochastic().replicates(),
         sc.stochastic().seed(), sc.stochastic().interannualVariabilityFactor(), seasons);

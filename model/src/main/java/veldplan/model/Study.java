@@ -21,6 +21,7 @@ public final class Study {
   private final int replicates;
   private final long seed;
   private final Forcing[] forcing;
+  private final Seasons seasons;
 
   /**
    * Builds the forcing of every path and replicate.
@@ -31,11 +32,10 @@ public final class Study {
    * @param replicates         replicates per path
    * @param seed               the scenario seed
    * @param variabilityFactor  interannual rainfall variability factor (1 = as observed)
-   * @param fireSeasons        early/late burning months, from
-   *                           {@link ForcingBuilder#fireSeasonMonths}
+   * @param seasons            the park's seasons, from {@link ForcingBuilder#seasons}
    */
   public Study(ModelParameters params, BaselineClimate baseline, List<ClimatePathModel> paths,
-      int replicates, long seed, double variabilityFactor, int[] fireSeasons) {
+      int replicates, long seed, double variabilityFactor, Seasons seasons) {
     if (replicates < 1) {
       throw new IllegalArgumentException("replicates must be >= 1: " + replicates);
     }
@@ -43,6 +43,7 @@ public final class Study {
     this.paths = List.copyOf(paths);
     this.replicates = replicates;
     this.seed = seed;
+    this.seasons = seasons;
     this.forcing = new Forcing[paths.size() * replicates];
     for (int path = 0; path < paths.size(); path++) {
       ClimatePathModel climate = paths.get(path);
@@ -54,9 +55,9 @@ public final class Study {
       for (int replicate = 0; replicate < replicates; replicate++) {
         long[] keys = Seeds.processKeys(Seeds.replicateSeed(pathSeed, replicate));
         Weather weather = WeatherGenerator.generate(baseline, climate, variabilityFactor,
-            keys[Seeds.Process.WEATHER.ordinal()]);
+            keys[Seeds.Process.WEATHER.ordinal()], seasons.firstMonth());
         forcing[path * replicates + replicate] = ForcingBuilder.build(params, weather,
-            fireSeasons, keys[Seeds.Process.FIRE.ordinal()],
+            seasons, keys[Seeds.Process.FIRE.ordinal()],
             keys[Seeds.Process.DEMOGRAPHY.ordinal()]);
       }
     }
@@ -70,6 +71,11 @@ public final class Study {
   /** Climate paths in scenario order. */
   public List<ClimatePathModel> paths() {
     return paths;
+  }
+
+  /** The park's seasons: when the model year starts, when burns are lit. */
+  public Seasons seasons() {
+    return seasons;
   }
 
   /** Replicates per path. */

@@ -152,7 +152,7 @@ final class TestParks {
     java.util.Arrays.fill(ones, 1);
     java.util.Arrays.fill(co2, co2Ppm);
     ClimatePathModel path = ClimatePathModel.deltaChange("steady", 0, ones, zeros, co2);
-    int[] seasons = ForcingBuilder.fireSeasonMonths(baseline, 400, -24);
+    Seasons seasons = ForcingBuilder.seasons(baseline, 400, -24);
     return new Study(params, baseline, List.of(path), replicates, seed, 1.0, seasons);
   }
 

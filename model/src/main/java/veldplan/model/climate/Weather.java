@@ -2,7 +2,9 @@ package veldplan.model.climate;
 
 /**
  * Monthly park weather of one replicate of one climate path over the horizon, before block
- * rainfall multipliers. Arrays are indexed [year * 12 + month0]; CO2 by year.
+ * rainfall multipliers. Arrays are indexed [year * 12 + month], where year is the model year and
+ * month its month counted from the model year's first month (see the model's Seasons); CO2 by
+ * year.
  */
 public final class Weather {
   final int years;
@@ -34,7 +36,7 @@ public final class Weather {
     return years;
   }
 
-  /** Rainfall of month {@code month0} (0 = January) in {@code year} (mm). */
+  /** Rainfall of month {@code month0} of model year {@code year} (mm). */
   public double rainfallMm(int year, int month0) {
     return rainfallMm[year * 12 + month0];
   }

@@ -6,7 +6,8 @@ import veldplan.shared.rng.CounterRandom;
  * Makes the weather of one replicate of one climate path.
  *
  * <p><b>Method.</b> For a delta-change path, each simulated year takes the months of one baseline
- * year drawn with replacement (one draw per year from the weather stream), so the seasonal cycle,
+ * year (a model year: from the first month of the rains to the end of the following dry season)
+ * drawn with replacement (one draw per year from the weather stream), so the seasonal cycle,
  * the correlation of rainfall and temperature within a year and the observed year-to-year
  * variability are kept. The year's rainfall total is then stretched away from the baseline mean
  * by the scenario's variability factor (1 keeps it as observed; months keep their shares), and the
@@ -23,30 +24,51 @@ public final class WeatherGenerator {
    * @param path                 the climate path
    * @param variabilityFactor    stretch of annual rainfall about the baseline mean (1 = observed)
    * @param weatherKey           the replicate's weather stream key
+   * @param firstMonth           calendar month (0 = January) in which the model year starts
    */
   public static Weather generate(BaselineClimate baseline, ClimatePathModel path,
-      double variabilityFactor, long weatherKey) {
-    if (path.isExplicit()) {
-      return new Weather(path.explicitRainfallMm, path.explicitTminC, path.explicitTmaxC,
-          path.co2Ppm);
-    }
+      double variabilityFactor, long weatherKey, int firstMonth) {
     int years = path.years();
     double[] rain = new double[years * 12];
     double[] tmin = new double[years * 12];
     double[] tmax = new double[years * 12];
-    double mean = baseline.meanAnnualRainfallMm;
+    if (path.isExplicit()) {
+      // Calendar-year series read from the model year's first month on; months past the end
+      // of the series repeat the same month of its last year.
+      int available = path.explicitRainfallMm.length;
+      for (int at = 0; at < years * 12; at++) {
+        int from = firstMonth + at;
+        while (from >= available) {
+          from -= 12;
+        }
+        rain[at] = path.explicitRainfallMm[from];
+        tmin[at] = path.explicitTminC[from];
+        tmax[at] = path.explicitTmaxC[from];
+      }
+      return new Weather(rain, tmin, tmax, path.co2Ppm);
+    }
+    // Whole model years of the baseline, from its first month to the month before it.
+    int baselineYears = firstMonth == 0 ? baseline.years : baseline.years - 1;
+    double mean = 0;
+    for (int year = 0; year < baselineYears; year++) {
+      for (int m = 0; m < 12; m++) {
+        mean += baseline.rainfallMm[year * 12 + firstMonth + m];
+      }
+    }
+    mean /= baselineYears;
     for (int year = 0; year < years; year++) {
-      int drawn = (int) (CounterRandom.uniform(weatherKey, year, 0) * baseline.years);
+      int drawn = (int) (CounterRandom.uniform(weatherKey, year, 0) * baselineYears);
+      int start = drawn * 12 + firstMonth;
       double total = 0;
       for (int m = 0; m < 12; m++) {
-        total += baseline.rainfallMm[drawn * 12 + m];
+        total += baseline.rainfallMm[start + m];
       }
       double stretched = Math.max(0, mean + variabilityFactor * (total - mean));
       double scale = total > 0 ? stretched / total : 0;
       double factor = Math.max(0, path.rainfallFactor[year]);
       double shift = path.temperatureShiftC[year];
       for (int m = 0; m < 12; m++) {
-        int from = drawn * 12 + m;
+        int from = start + m;
         int to = year * 12 + m;
         rain[to] = baseline.rainfallMm[from] * scale * factor;
         tmin[to] = baseline.tminC[from] + shift;
