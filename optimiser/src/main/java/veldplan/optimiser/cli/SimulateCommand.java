@@ -72,7 +72,8 @@ public final class SimulateCommand implements Callable<Integer> {
       description = "Replicates per climate path (default: the scenario's).")
   Integer replicates;
 
-  @Option(names = "--seed", paramLabel = "S", description = "Scenario seed (default: the scenario's).")
+  @Option(names = "--seed", paramLabel = "S",
+      description = "Scenario seed (default: the scenario's).")
   Long seed;
 
   @Option(names = "--threads", paramLabel = "N",
@@ -130,12 +131,30 @@ public final class SimulateCommand implements Callable<Integer> {
       return ExitCodes.BAD_INPUT;
     }
 
+    // A scenario can pass the reader and still describe something the model cannot use (a soil
+    // whose water contents come out in the wrong order, say): that is bad input too, found
+    // before anything runs or is written. The message starts with a JSON pointer.
+    Study study;
+    ManagementPlan plan;
+    Path source = scenarioFile;
     try {
-      Scenario sc = loaded.scenario();
       // A path simulated alone keeps the random streams it has in the whole scenario.
-      Study study = ParametersFromScenario.study(loaded,
-          pathName == null ? null : List.of(pathName));
-      ManagementPlan plan = ParametersFromScenario.plan(policy, sc);
+      study = ParametersFromScenario.study(loaded, pathName == null ? null : List.of(pathName));
+      if (policyFile != null) {
+        source = policyFile;
+      }
+      plan = ParametersFromScenario.plan(policy, loaded.scenario());
+    } catch (IllegalArgumentException e) {
+      err.println("error: " + source + ": 1 problem");
+      err.println("  " + (e.getMessage() != null ? e.getMessage() : "unusable values"));
+      if (debug) {
+        e.printStackTrace(err);
+      }
+      err.flush();
+      return ExitCodes.BAD_INPUT;
+    }
+
+    try {
       int workers = threads != null ? threads : Runtime.getRuntime().availableProcessors();
       int total = study.paths().size() * study.replicates();
       Trajectory[][] runs;
@@ -179,20 +198,56 @@ public final class SimulateCommand implements Callable<Integer> {
       return ExitCodes.OK;
     } catch (IOException e) {
       err.println("error: could not write to " + out + ": " + e.getMessage());
+      // Say where a previous result is if it could not be put back (see AtomicFiles.writeAll).
+      for (Throwable note : e.getSuppressed()) {
+        err.println("  " + note.getMessage());
+      }
       if (debug) {
         e.printStackTrace(err);
       }
       return ExitCodes.FAILURE;
     } catch (RuntimeException e) {
+      // The model's message names the climate path, replicate and seed of the failed run.
       err.println("error: the simulation failed: "
           + (e.getMessage() != null ? e.getMessage() : e.getClass().getSimpleName()));
-      err.println("Scenario " + scenarioFile + ", seed " + loaded.scenario().stochastic().seed()
-          + "; rerun with --debug for the stack trace and report it with the scenario.");
+      err.println("Scenario " + scenarioFile + ", seed " + study.seed() + ". To reproduce it"
+          + (debug ? ":" : ", rerun with --debug for the stack trace:"));
+      err.println("  " + reproduction(study));
+      err.println("and report it with the scenario" + (policyFile != null ? " and policy" : "")
+          + " file.");
       if (debug) {
         e.printStackTrace(err);
       }
+      err.flush();
       return ExitCodes.FAILURE;
     }
+  }
+
+  /**
+   * The command line that repeats this run with a stack trace: the same scenario, policy and
+   * climate path, and the seed and number of replicates actually used (a replicate's random
+   * numbers depend only on the seed, its path and its number).
+   */
+  private String reproduction(Study study) {
+    List<String> words = new ArrayList<>(List.of("veldplan", "simulate",
+        quoted(scenarioFile.toString())));
+    if (policyFile != null) {
+      words.addAll(List.of("--policy", quoted(policyFile.toString())));
+    }
+    if (pathName != null) {
+      words.addAll(List.of("--path", quoted(pathName)));
+    }
+    words.addAll(List.of("--replicates", Integer.toString(study.replicates()),
+        "--seed", Long.toString(study.seed()), "--out", quoted(out.toString()), "--debug"));
+    return String.join(" ", words);
+  }
+
+  /** A word for a POSIX shell: as is if plain, else in single quotes. */
+  private static String quoted(String word) {
+    if (!word.isEmpty() && word.matches("[A-Za-z0-9_./:=+,@%-]+")) {
+      return word;
+    }
+    return "'" + word.replace("'", "'\\''") + "'";
   }
 
   private static int commandLineProblems(PrintWriter err, List<String> problems) {

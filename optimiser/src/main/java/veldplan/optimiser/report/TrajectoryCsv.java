@@ -3,6 +3,7 @@ package veldplan.optimiser.report;
 import java.io.IOException;
 import java.io.Writer;
 import java.util.List;
+import java.util.Locale;
 import veldplan.model.BlockSeries;
 import veldplan.model.ModelParameters;
 import veldplan.model.ParkSeries;
@@ -11,36 +12,64 @@ import veldplan.model.Trajectory;
 /**
  * Writes trajectories as one tidy CSV: one row per year x climate path x replicate x entity
  * (a block, a guild, the elephants, a predator, or the park as a whole), units in the column
- * names, empty cells where a column does not apply to the entity. R's {@code read.csv} and
- * pandas' {@code read_csv} read it as is.
+ * names (the scenario's currency in the park's cost columns), empty cells where a column does
+ * not apply to the entity. R's {@code read.csv} and pandas' {@code read_csv} read it as is.
  */
 public final class TrajectoryCsv {
+  /** Start of the names of the park's cost columns, which get the currency appended. */
+  private static final String COST_PREFIX = "cost_";
+
   private TrajectoryCsv() {}
 
-  /** The header line's columns. */
-  public static String header() {
+  /**
+   * The header line's columns. The park's cost columns end with the scenario's currency code in
+   * lower case ({@code cost_total_usd}); see {@link #currencySuffix}.
+   *
+   * @param p model parameters (for the currency)
+   * @return the header, without a line break
+   */
+  public static String header(ModelParameters p) {
+    String currency = currencySuffix(p.costs().currency());
     StringBuilder h = new StringBuilder("path,replicate,calendar_year,entity_kind,entity");
     for (int v = 0; v < BlockSeries.COUNT; v++) {
       h.append(',').append(BlockSeries.of(v).column());
     }
     h.append(",abundance_head,density_per_km2");
     for (int v = 0; v < ParkSeries.COUNT; v++) {
-      h.append(',').append(ParkSeries.of(v).column());
+      String column = ParkSeries.of(v).column();
+      h.append(',').append(column);
+      if (column.startsWith(COST_PREFIX)) {
+        h.append('_').append(currency);
+      }
     }
     return h.toString();
+  }
+
+  /**
+   * A currency code as a column-name suffix: lower case, with every character outside
+   * {@code [a-z0-9]} removed ({@code "USD"} gives {@code "usd"}); {@code "currency"} if nothing
+   * is left, so that a cost column never looks unitless.
+   *
+   * @param currency the scenario's currency code
+   * @return the suffix, without the separating underscore
+   */
+  public static String currencySuffix(String currency) {
+    String suffix = currency == null ? ""
+        : currency.toLowerCase(Locale.ROOT).replaceAll("[^a-z0-9]", "");
+    return suffix.isEmpty() ? "currency" : suffix;
   }
 
   /**
    * Writes all trajectories.
    *
    * @param out          destination
-   * @param p            model parameters (names, areas, start year)
+   * @param p            model parameters (names, areas, start year, currency)
    * @param pathNames    climate path names, in trajectory order
    * @param trajectories [path][replicate]
    */
   public static void write(Writer out, ModelParameters p, List<String> pathNames,
       Trajectory[][] trajectories) throws IOException {
-    out.write(header());
+    out.write(header(p));
     out.write('\n');
     int blocks = p.blocks().count();
     int herbivores = p.herbivores().count();

@@ -34,6 +34,7 @@ import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.Arguments;
 import org.junit.jupiter.params.provider.MethodSource;
+import veldplan.model.ParametersFromScenario;
 import veldplan.optimiser.cli.CliTestSupport.Result;
 import veldplan.optimiser.report.TrajectoryCsv;
 import veldplan.shared.scenario.BurnPlan;
@@ -103,7 +104,20 @@ class SimulateCommandTest {
     int paths = 1;
     int replicates = 2;
     List<String> lines = Files.readAllLines(csv, StandardCharsets.UTF_8);
-    assertEquals(TrajectoryCsv.header(), lines.get(0), "CSV header");
+    assertEquals(TrajectoryCsv.header(ParametersFromScenario.parameters(sc)), lines.get(0),
+        "CSV header");
+    // The park's costs carry the scenario's currency (USD in the example) in their names.
+    String currency = sc.costs().currency().toLowerCase(Locale.ROOT);
+    assertEquals("usd", currency, "the example's currency changed; update this test");
+    List<String> header = cells(lines.get(0));
+    for (String cost : List.of("cost_burning", "cost_elephant_offtake", "cost_contraception",
+        "cost_water_points", "cost_total", "cost_present_value")) {
+      assertTrue(header.contains(cost + "_" + currency),
+          "no column " + cost + "_" + currency + " in " + header);
+      assertFalse(header.contains(cost), "column " + cost + " has no currency: " + header);
+    }
+    assertTrue(header.contains("elephants_removed_head") && header.contains("co2_ppm"),
+        "the park's non-cost columns changed: " + header);
     assertEquals(sc.horizonYears() * paths * replicates * entitiesPerYear + 1, lines.size(),
         "rows = years x paths x replicates x entities + header");
     List<Map<String, String>> rows = parseCsv(csv);
@@ -164,7 +178,8 @@ class SimulateCommandTest {
   void simulate_oneThreadOrTwo_writesByteIdenticalTrajectories() throws IOException {
     byte[] one = simulateExample(tmp.resolve("t1"), "--replicates", "2", "--threads", "1");
     byte[] two = simulateExample(tmp.resolve("t2"), "--replicates", "2", "--threads", "2");
-    assertTrue(one.length > TrajectoryCsv.header().length(), "trajectories.csv has no rows");
+    String header = TrajectoryCsv.header(ParametersFromScenario.parameters(exampleScenario));
+    assertTrue(one.length > header.length(), "trajectories.csv has no rows");
     assertArrayEquals(one, two, "trajectories.csv differs between --threads 1 and --threads 2");
   }
 
@@ -324,6 +339,35 @@ class SimulateCommandTest {
       }
     } else {
       assertFalse(Files.exists(out), "a failed run created " + out);
+    }
+  }
+
+  @Test
+  void simulate_soilTheModelCannotUse_exitsTwoNamingFileAndBlockAndWritesNothing()
+      throws IOException, ScenarioException {
+    // Passes the reader (every value in range) but gives no ordered soil water contents.
+    Path scenario = resource("scenarios/unusable-soil/scenario.yaml");
+    ScenarioReader.load(scenario);
+    Path out = tmp.resolve("out");
+    byte[] oldCsv = "old,content\n1,2\n".getBytes(StandardCharsets.UTF_8);
+    Files.createDirectories(out);
+    Files.write(out.resolve("trajectories.csv"), oldCsv);
+
+    Result r = run("simulate", scenario.toString(), "--replicates", "1", "--out", out.toString());
+
+    assertEquals(ExitCodes.BAD_INPUT, r.exitCode(), r.transcript());
+    List<String> lines = r.err().lines().toList();
+    assertEquals("error: " + scenario + ": 1 problem", lines.get(0), r.transcript());
+    assertTrue(lines.size() > 1 && lines.get(1).startsWith("  /park/blocks/1"),
+        "the problem line does not start with the JSON pointer of the second block, "
+            + "/park/blocks/1\n" + r.transcript());
+    assertNoStackTrace(r);
+    assertNoSummary(r);
+    assertArrayEquals(oldCsv, Files.readAllBytes(out.resolve("trajectories.csv")),
+        "the earlier trajectories.csv was changed by a failed run");
+    try (Stream<Path> left = Files.list(out)) {
+      assertEquals(List.of(out.resolve("trajectories.csv")), left.toList(),
+          "a failed run left files in " + out);
     }
   }
 
