@@ -22,7 +22,7 @@ public enum ParkSeries {
     this.column = column;
   }
 
-  /** Output column name, with the currency or unit. */
+  /** Output column name; the CSV writer appends the currency to the cost columns. */
   public String column() {
     return column;
   }

@@ -33,11 +33,17 @@ class ElephantDamageTest {
     return s;
   }
 
+  /** The builder's park with every part of the block within reach of water. */
   private static TestParks park() {
+    return park(50, 0);
+  }
+
+  private static TestParks park(int waterPoints, double riverKm) {
     TestParks park = new TestParks();
     park.years = 2;
     park.replicates = 1;
-    park.waterPoints = 50; // every part of the block within reach of water
+    park.waterPoints = waterPoints;
+    park.riverKm = riverKm;
     return park;
   }
 
@@ -48,9 +54,12 @@ class ElephantDamageTest {
    * the ratio.
    */
   private static double breakage(int k, double density) {
+    return breakage(park(), k, density);
+  }
+
+  private static double breakage(TestParks park, int k, double density) {
     double[] trees = new double[TreeClass.COUNT];
     trees[k] = 100;
-    TestParks park = park();
     EcosystemState with = oneYear(park, trees, density);
     EcosystemState without = oneYear(park, trees, 0);
     return 1 - with.treesPerHa(0, k) / without.treesPerHa(0, k);
@@ -58,20 +67,24 @@ class ElephantDamageTest {
 
   @Test
   void breakage_oneClassStand_matchesTheDocumentedFormOfTreesUpdate() {
-    // [D] consistency with the documented form (Trees class comment, TreeParameters):
-    // broken share = reach x (1 - exp(-u_k D / reach)), D elephants per km2 of the block,
-    // u_k from TreeParameters.defaults(). Tolerance 1e-12: arithmetic on the same formula.
-    ModelParameters p = park().parameters();
-    EcosystemState reached = new EcosystemState(p);
-    reached.reset(p);
-    Herbivory.updateReach(p.blocks(), p.herbivores(), reached);
-    double reach = reached.reach(p.herbivores().elephantIndex(), 0);
-    double[] u = p.trees().elephantBreakageKm2PerElephant;
-    for (double density : new double[] {0.5, 1.0}) {
-      for (int k = TreeClass.FROM_2_TO_5M.ordinal(); k < TreeClass.COUNT; k++) {
-        double expected = reach * (1 - Math.exp(-u[k] * density));
-        assertEquals(expected, breakage(k, density), 1e-12,
-            TreeClass.of(k).label() + " at " + density + " per km2");
+    // [D] consistency with the documented form (TreeParameters, elephantBreakageKm2PerElephant):
+    // broken share = r (1 - exp(-u_k D)), D elephants per km2 within their reach, r the share
+    // of the block within reach, u_k from TreeParameters.defaults(). Two parks: the whole block
+    // within reach, and water only along a 2 km river, so that r is well below 1.
+    // Tolerance 1e-12: the same arithmetic done twice.
+    for (TestParks park : new TestParks[] {park(), park(0, 2)}) {
+      ModelParameters p = park.parameters();
+      EcosystemState reached = new EcosystemState(p);
+      reached.reset(p);
+      Herbivory.updateReach(p.blocks(), p.herbivores(), reached);
+      double reach = reached.reach(p.herbivores().elephantIndex(), 0);
+      double[] u = p.trees().elephantBreakageKm2PerElephant;
+      for (double density : new double[] {0.5, 1.0}) {
+        for (int k = TreeClass.FROM_2_TO_5M.ordinal(); k < TreeClass.COUNT; k++) {
+          double expected = reach * (1 - Math.exp(-u[k] * density));
+          assertEquals(expected, breakage(park, k, density), 1e-12, TreeClass.of(k).label()
+              + " at " + density + " per km2 in reach, reach " + reach);
+        }
       }
     }
   }

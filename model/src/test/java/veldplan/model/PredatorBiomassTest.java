@@ -18,10 +18,10 @@ class PredatorBiomassTest {
   void predators_longRunWithoutNoise_settleNearTheirCarboneGittlemanCapacity() {
     // [D] consistency, not evidence: the model's predator capacity is 90.1 kg of predator per
     // 10,000 kg of the prey it hunts (Carbone & Gittleman 2002, Science 295: 2273-2276 [V,
-    // abstract], methods sheet §10.3; the constant 90.1 is from memory), i.e. 0.9 % of prey
-    // biomass whatever the predator's mass. At equilibrium the ratio would be 0.9 %; the band
-    // 0.3-3 % is the order-of-magnitude band of the methods sheet §10.3 and allows for the
-    // dynamics still moving after 60 years and for predation feeding back on the prey.
+    // abstract], methods sheet §10.3; the constant 90.1 is from memory), so a predator guild at
+    // its capacity has 0.9 % of its prey's biomass, whatever its body mass. The band 0.3-3 % is
+    // the order-of-magnitude band of the methods sheet §10.3; the test fails if the mean over
+    // the last 20 of 80 years is far from the capacity.
     TestParks park = new TestParks();
     park.noiseSd = 0;
     park.replicates = 1;

@@ -82,9 +82,10 @@ class ProcessInvariantsTest {
     EcosystemState s = new EcosystemState(p);
     s.reset(p);
     for (int year = 0; year < p.years(); year++) {
+      s.year = year; // as AnnualCycle.advance does
       for (int process = 0; process < AnnualCycle.PROCESSES.length; process++) {
         AnnualCycle.step(process, p, plan, f, year, s);
-        String where = AnnualCycle.PROCESSES[process] + ", year " + s.year;
+        String where = AnnualCycle.PROCESSES[process] + ", year " + year;
         String problem = s.violation();
         assertNull(problem, where + ": " + problem);
       }

@@ -32,6 +32,7 @@ import picocli.CommandLine.Model.CommandSpec;
 import veldplan.model.Ensemble;
 import veldplan.model.ManagementPlan;
 import veldplan.model.ParametersFromScenario;
+import veldplan.model.Seasons;
 import veldplan.model.Study;
 import veldplan.model.Trajectory;
 import veldplan.optimiser.report.SimulationSummary;
@@ -190,6 +191,11 @@ public final class SimulateCommand implements Callable<Integer> {
 
       stdout.println(SimulationSummary.format(study.parameters(), pathNames, runs,
           policy.name()));
+      Seasons seasons = study.seasons();
+      stdout.printf(Locale.ROOT, "Model years run from %s (the start of the rains); year Y is "
+          + "the season that starts in Y. Early-dry burns in %s, late-dry burns in %s.%n",
+          Seasons.monthName(seasons.firstMonth()), Seasons.monthName(seasons.earlyBurnMonth()),
+          Seasons.monthName(seasons.lateBurnMonth()));
       stdout.printf(Locale.ROOT, "Wrote %s (%d runs) and %s in %.1f s.%n", csv, total,
           json, Duration.between(started, finished).toMillis() / 1000.0);
       stdout.println();
@@ -276,6 +282,9 @@ public final class SimulateCommand implements Callable<Integer> {
     ArrayNode paths = root.putArray("climatePaths");
     pathNames.forEach(paths::add);
     root.put("startYear", study.parameters().startYear());
+    root.put("modelYearStartsIn", Seasons.monthName(study.seasons().firstMonth()));
+    root.put("earlyDryBurnMonth", Seasons.monthName(study.seasons().earlyBurnMonth()));
+    root.put("lateDryBurnMonth", Seasons.monthName(study.seasons().lateBurnMonth()));
     root.put("horizonYears", study.parameters().years());
     root.put("threads", workers);
     root.put("randomNumbers", "counter-based SplitMix64 mixing; seed tree scenario > path > "

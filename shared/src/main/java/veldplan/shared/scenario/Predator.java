@@ -10,9 +10,9 @@ import java.util.List;
  * @param initialAbundance         animals at the start (head)
  * @param quasiExtinctionAbundance quasi-extinction threshold (head)
  * @param preyGuilds               names of the guilds it hunts (elephants are not prey)
- * @param switchingExponent        prey-switching exponent m in share_i = c N_i^m / sum c N_j^m
- *                                 (1 = no switching); absent = 2, the value commonly used
- *                                 (Murdoch 1969 form)
+ * @param switchingExponent        prey-switching exponent m in share_i = B_i^m / sum B_j^m over
+ *                                 the guilds hunted, B the prey biomass (1 = no switching);
+ *                                 absent = 2, the value commonly used (Murdoch 1969 form)
  * @param environmentalNoiseSd     SD of the yearly log growth rate from environmental noise
  * @param functionalResponseType   Holling type of the kill rate's response to prey density: 2
  *                                 (saturating) or 3 (sigmoid, prey scarce are spared); absent = 2
