@@ -47,7 +47,10 @@ public final class ClimatePathModel {
         temperatureShiftC.clone(), co2Ppm, null, null, null);
   }
 
-  /** An explicit path: the same monthly series in every replicate; see {@link #deltaChange}. */
+  /**
+   * An explicit path: its monthly series, with each replicate's weather anomalies added by the
+   * weather generator; see {@link #deltaChange} for {@code seedIndex}.
+   */
   public static ClimatePathModel explicit(String name, int seedIndex, double[] rainfallMm,
       double[] tminC, double[] tmaxC, double[] co2Ppm) {
     if (rainfallMm.length != co2Ppm.length * 12) {

@@ -14,7 +14,7 @@ import veldplan.shared.rng.CounterRandom;
  * delta change of that year applied: rainfall times the path's factor, temperatures plus its
  * shift. This is the delta-change method of climate impact studies (e.g. Hay, Wilby &amp; Leavesley
  * 2000, J. Am. Water Resour. Assoc. 36: 387–397, from memory) applied to a bootstrap of years.
- * An explicit path is used as given in every replicate.
+ * An explicit path gets the anomalies of a bootstrapped baseline year added to its own months.
  */
 public final class WeatherGenerator {
   private WeatherGenerator() {}
@@ -32,23 +32,13 @@ public final class WeatherGenerator {
     double[] rain = new double[years * 12];
     double[] tmin = new double[years * 12];
     double[] tmax = new double[years * 12];
-    if (path.isExplicit()) {
-      // Calendar-year series read from the model year's first month on; months past the end
-      // of the series repeat the same month of its last year.
-      int available = path.explicitRainfallMm.length;
-      for (int at = 0; at < years * 12; at++) {
-        int from = firstMonth + at;
-        while (from >= available) {
-          from -= 12;
-        }
-        rain[at] = path.explicitRainfallMm[from];
-        tmin[at] = path.explicitTminC[from];
-        tmax[at] = path.explicitTmaxC[from];
-      }
-      return new Weather(rain, tmin, tmax, path.co2Ppm);
-    }
     // Whole model years of the baseline, from its first month to the month before it.
     int baselineYears = firstMonth == 0 ? baseline.years : baseline.years - 1;
+    if (path.isExplicit()) {
+      explicitWithAnomalies(baseline, path, variabilityFactor, weatherKey, firstMonth,
+          baselineYears, rain, tmin, tmax);
+      return new Weather(rain, tmin, tmax, path.co2Ppm);
+    }
     double mean = 0;
     for (int year = 0; year < baselineYears; year++) {
       for (int m = 0; m < 12; m++) {
@@ -76,5 +66,46 @@ public final class WeatherGenerator {
       }
     }
     return new Weather(rain, tmin, tmax, path.co2Ppm);
+  }
+
+  /**
+   * An explicit path with replicate variability: each model year takes the path's months and
+   * adds the anomalies of one baseline year drawn with replacement (rainfall as a ratio to the
+   * baseline monthly mean, stretched by the variability factor; temperatures as differences), so
+   * replicates vary around the path as the observed years varied around their mean. Months past
+   * the end of the path's series repeat the same month of its last year.
+   */
+  private static void explicitWithAnomalies(BaselineClimate baseline, ClimatePathModel path,
+      double variabilityFactor, long weatherKey, int firstMonth, int baselineYears,
+      double[] rain, double[] tmin, double[] tmax) {
+    double[] meanRain = new double[12];
+    double[] meanTmin = new double[12];
+    double[] meanTmax = new double[12];
+    for (int year = 0; year < baselineYears; year++) {
+      for (int m = 0; m < 12; m++) {
+        int from = year * 12 + firstMonth + m;
+        meanRain[m] += baseline.rainfallMm[from] / baselineYears;
+        meanTmin[m] += baseline.tminC[from] / baselineYears;
+        meanTmax[m] += baseline.tmaxC[from] / baselineYears;
+      }
+    }
+    int available = path.explicitRainfallMm.length;
+    int years = path.years();
+    for (int year = 0; year < years; year++) {
+      int drawn = (int) (CounterRandom.uniform(weatherKey, year, 0) * baselineYears);
+      for (int m = 0; m < 12; m++) {
+        int from = year * 12 + firstMonth + m;
+        while (from >= available) {
+          from -= 12;
+        }
+        int observed = drawn * 12 + firstMonth + m;
+        double ratio = meanRain[m] > 0 ? baseline.rainfallMm[observed] / meanRain[m] : 1;
+        int to = year * 12 + m;
+        double stretched = Math.max(0, 1 + variabilityFactor * (ratio - 1));
+        rain[to] = path.explicitRainfallMm[from] * stretched;
+        tmin[to] = path.explicitTminC[from] + baseline.tminC[observed] - meanTmin[m];
+        tmax[to] = path.explicitTmaxC[from] + baseline.tmaxC[observed] - meanTmax[m];
+      }
+    }
   }
 }
