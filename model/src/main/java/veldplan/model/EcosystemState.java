@@ -73,13 +73,15 @@ public final class EcosystemState {
   final double[] resourceShare;
   /** 1 / (reach x acceptance) [herbivore * categories + category]; 0 where unusable. */
   final double[] inverseUsable;
+  /** Scratch: demand falling where one herbivore feeds, per category. */
+  final double[] competingKg;
   /** 1 / usable supply per category this year; 0 where there is none. */
   final double[] inverseSupply;
   /** This year's demand on forage shared with others, head x intake / coarse factor (kg). */
   final double[] sharedDemandKg;
-  /** Overlap weights [(category * herbivores + h) * herbivores + o], kept by Herbivory. */
+  /** Overlap weights [(h * herbivores + o) * categories + category], kept by Herbivory. */
   final double[] overlap;
-  /** Demand per category per unit of reach and acceptance [category * herbivores + h]. */
+  /** Demand per category per unit of reach and acceptance [herbivore * categories + k]. */
   final double[] demandDensity;
   final double[] nextClasses = new double[TreeClass.COUNT];
 
@@ -129,6 +131,7 @@ public final class EcosystemState {
     resourceShare = new double[herbivores * blocks * Herbivory.CATEGORIES_PER_BLOCK];
     inverseUsable = new double[blocks * Herbivory.CATEGORIES_PER_BLOCK * herbivores];
     sharedDemandKg = new double[herbivores];
+    competingKg = new double[blocks * Herbivory.CATEGORIES_PER_BLOCK];
     inverseSupply = new double[blocks * Herbivory.CATEGORIES_PER_BLOCK];
     checked = new double[][] {treesPerHa, leftoverGrassKgPerHa, abundance, predatorAbundance,
         fuelKgPerHa, grassProductionKgPerHa, plannedBurntFraction, wildBurntFraction, reach,

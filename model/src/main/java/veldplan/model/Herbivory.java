@@ -1,5 +1,6 @@
 package veldplan.model;
 
+import java.util.Arrays;
 import veldplan.model.ecology.WaterCoverage;
 
 /**
@@ -86,11 +87,10 @@ final class Herbivory {
         for (int h = 0; h < herbivores; h++) {
           double rh = s.reach[h * blocks + b];
           double ah = accept[h * CATEGORIES_PER_BLOCK + c];
-          int row = (k * herbivores + h) * herbivores;
           for (int o = 0; o < herbivores; o++) {
             double ro = s.reach[o * blocks + b];
             double ao = accept[o * CATEGORIES_PER_BLOCK + c];
-            s.overlap[row + o] = rh > 0 && ah > 0
+            s.overlap[(h * herbivores + o) * categories + k] = rh > 0 && ah > 0
                 ? Math.min(rh, ro) * Math.min(ah, ao) / (rh * ah) : 0;
           }
         }
@@ -234,7 +234,7 @@ final class Herbivory {
       sharedDemand[o] = demand;
       int row = o * categories;
       for (int k = 0; k < categories; k++) {
-        density[k * herbivores + o] = demand * share[row + k] * inverseUsable[row + k];
+        density[row + k] = demand * share[row + k] * inverseUsable[row + k];
       }
     }
     // Depletion h meets in category k: the demand falling on the part of k it can use, over the
@@ -254,22 +254,27 @@ final class Herbivory {
       elephantUse[b] = 0;
     }
     double[] overlap = s.overlap;
+    double[] competing = s.competingKg;
     for (int h = 0; h < herbivores; h++) {
       int row = h * categories;
       double demand = sharedDemand[h];
       double pressure = 0;
+      // Demand of all herbivores falling where h feeds, category by category (a loop over
+      // categories for each other herbivore, which the JIT can vectorise).
+      Arrays.fill(competing, 0);
+      for (int o = 0; o < herbivores; o++) {
+        int from = o * categories;
+        int weights = (h * herbivores + o) * categories;
+        for (int k = 0; k < categories; k++) {
+          competing[k] += density[from + k] * overlap[weights + k];
+        }
+      }
       for (int k = 0; k < categories; k++) {
         double used = share[row + k];
         if (used == 0) {
           continue;
         }
-        int demandRow = k * herbivores;
-        int weights = (k * herbivores + h) * herbivores;
-        double competing = 0;
-        for (int o = 0; o < herbivores; o++) {
-          competing += density[demandRow + o] * overlap[weights + o];
-        }
-        double depletion = competing * inverseSupply[k];
+        double depletion = competing[k] * inverseSupply[k];
         pressure += used * depletion;
         // Share of its demand met here: all of it unless the category is over-used.
         double got = depletion > 1 ? used / depletion : used;
