@@ -28,32 +28,30 @@ public final class Seeds {
 
   /** Seed of climate path {@code path} (0-based) under the scenario seed. */
   public static long pathSeed(long scenarioSeed, int path) {
-    SplittableRandom root = new SplittableRandom(scenarioSeed);
-    long seed = 0;
-    for (int i = 0; i <= path; i++) {
-      seed = root.nextLong();
-    }
-    return seed;
+    return child(scenarioSeed, path);
   }
 
   /** Seed of replicate {@code replicate} (0-based) of a path. */
   public static long replicateSeed(long pathSeed, int replicate) {
-    SplittableRandom path = new SplittableRandom(pathSeed);
-    long seed = 0;
-    for (int i = 0; i <= replicate; i++) {
-      seed = path.nextLong();
-    }
-    return seed;
+    return child(pathSeed, replicate);
   }
 
   /** Key of one process stream of a replicate, for {@link CounterRandom}. */
   public static long processKey(long replicateSeed, Process process) {
-    SplittableRandom replicate = new SplittableRandom(replicateSeed);
-    long key = 0;
-    for (int i = 0; i <= process.ordinal(); i++) {
-      key = replicate.nextLong();
+    return child(replicateSeed, process.ordinal());
+  }
+
+  /** The {@code index}-th (0-based) long drawn from a SplittableRandom seeded by the parent. */
+  private static long child(long parentSeed, int index) {
+    if (index < 0) {
+      throw new IllegalArgumentException("index must be >= 0: " + index);
     }
-    return key;
+    SplittableRandom parent = new SplittableRandom(parentSeed);
+    long seed = 0;
+    for (int i = 0; i <= index; i++) {
+      seed = parent.nextLong();
+    }
+    return seed;
   }
 
   /** All process keys of a replicate, indexed by {@link Process#ordinal()}. */
