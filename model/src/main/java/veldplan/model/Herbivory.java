@@ -108,7 +108,7 @@ final class Herbivory {
   }
 
   /** Browse below and above 2 m, and this year's tall-grass share, per block. */
-  private static void browseAndTallGrass(ModelParameters p, EcosystemState s) {
+  static void browseAndTallGrass(ModelParameters p, EcosystemState s) {
     TreeParameters t = p.trees();
     GrassParameters gp = p.grass();
     double grassUse = gp.properUseFraction();
@@ -131,7 +131,7 @@ final class Herbivory {
   }
 
   /** Share of grass in each herbivore's diet; elephants choose by what they find. */
-  private static void elephantDiet(ModelParameters p, EcosystemState s) {
+  static void elephantDiet(ModelParameters p, EcosystemState s) {
     BlockParameters bp = p.blocks();
     HerbivoreParameters hp = p.herbivores();
     int blocks = s.blocks;
@@ -164,7 +164,7 @@ final class Herbivory {
   }
 
   /** Usable supply per category, and each herbivore's forage and shares p_hk. */
-  private static void usableForage(ModelParameters p, EcosystemState s) {
+  static void usableForage(ModelParameters p, EcosystemState s) {
     GrassParameters gp = p.grass();
     double grassUse = gp.properUseFraction();
     double browseUse = gp.browseUseFraction();
@@ -215,7 +215,7 @@ final class Herbivory {
   }
 
   /** Depletion each herbivore meets, what it gets, and what is eaten where. */
-  private static void compete(ModelParameters p, EcosystemState s) {
+  static void compete(ModelParameters p, EcosystemState s) {
     int e = p.herbivores().elephant;
     double[] supply = s.categorySupplyKg;
     double[] share = s.resourceShare;
@@ -300,7 +300,7 @@ final class Herbivory {
   }
 
   /** Grazing takes grass from the fuel; the grazed and browsed shares of the year. */
-  private static void eat(EcosystemState s) {
+  static void eat(EcosystemState s) {
     int blocks = s.blocks;
     for (int b = 0; b < blocks; b++) {
       double eatenKgPerHa = Math.min(s.grazedFraction[b], s.fuelKgPerHa[b]);
