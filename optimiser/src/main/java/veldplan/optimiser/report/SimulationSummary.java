@@ -72,9 +72,34 @@ public final class SimulationSummary {
       }
     }
     rows.add(new Row("large trees (above 5 m)", "trees/ha", largeStart, largeEnd));
+    for (int h = 0; h < p.herbivores().count(); h++) {
+      double threshold = p.herbivores().quasiExtinctionAbundance(h);
+      double[] risk = new double[paths];
+      for (int path = 0; path < paths; path++) {
+        for (Trajectory t : runs[path]) {
+          risk[path] += fellBelow(t, h, threshold) ? 100.0 / runs[path].length : 0;
+        }
+      }
+      rows.add(new Row(p.herbivores().name(h) + " below threshold", "% of runs", Double.NaN,
+          risk));
+    }
     rows.add(new Row("area burnt per year", "% of park", Double.NaN, burnt));
     rows.add(new Row("management cost, present value", p.costs().currency(), Double.NaN, cost));
     return rows;
+  }
+
+  /**
+   * True if herbivore {@code h} fell below its quasi-extinction threshold in any year of the
+   * run (a threshold of 0 counts as reached only when the guild dies out).
+   */
+  static boolean fellBelow(Trajectory t, int h, double threshold) {
+    for (int y = 0; y < t.years(); y++) {
+      double n = t.abundance(y, h);
+      if (threshold > 0 ? n < threshold : n == 0) {
+        return true;
+      }
+    }
+    return false;
   }
 
   /** The table as text. */
@@ -87,8 +112,10 @@ public final class SimulationSummary {
         "Policy \"%s\": %d climate path(s) x %d replicate(s), %d-%d.%n", policyName,
         pathNames.size(), runs[0].length, p.startYear(), endYear));
     out.append(String.format(Locale.ROOT,
-        "Start = scenario's initial value; paths = mean over replicates at the end of %d "
-            + "(area burnt: mean over years; cost: discounted at %s %%/yr, summed).%n",
+        "start = the scenario's initial value; each path = mean over its replicates at the end "
+            + "of %d;%narea burnt = mean over the years; cost = discounted at %s %%/yr and summed; "
+            + "below threshold = share of%nruns in which the guild fell below its "
+            + "quasi-extinction threshold in some year.%n",
         endYear, trim(p.costs().discountRatePercent())));
     int labelWidth = 32;
     int unitWidth = 10;
