@@ -211,7 +211,6 @@ final class Herbivory {
         }
       }
     }
-
   }
 
   /** Depletion each herbivore meets, what it gets, and what is eaten where. */
