@@ -14,6 +14,8 @@ public final class Main implements Runnable {
 
   /** Entry point. */
   public static void main(String[] args) {
+    // Charts are drawn off screen; no display is needed.
+    System.setProperty("java.awt.headless", "true");
     System.exit(execute(args));
   }
 

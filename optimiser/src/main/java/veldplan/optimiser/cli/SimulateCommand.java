@@ -5,7 +5,7 @@ import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.IOException;
-import java.io.Writer;
+import java.io.OutputStream;
 import java.io.PrintWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -37,6 +37,7 @@ import veldplan.model.Study;
 import veldplan.model.Trajectory;
 import veldplan.optimiser.report.SimulationSummary;
 import veldplan.optimiser.report.TrajectoryCsv;
+import veldplan.optimiser.report.TrajectoryPlots;
 import veldplan.shared.io.AtomicFiles;
 import veldplan.shared.io.IoConsumer;
 import veldplan.shared.scenario.ClimatePath;
@@ -52,7 +53,8 @@ import veldplan.shared.scenario.Stochastic;
     description = {
         "Runs one management policy on every climate path and stochastic replicate of a",
         "scenario and writes the yearly trajectories of every block, guild and cost."},
-    footer = {"", "Writes OUT/trajectories.csv and OUT/run.json (settings and provenance).",
+    footer = {"", "Writes OUT/trajectories.csv, OUT/run.json (settings and provenance) and one",
+        "chart per indicator in OUT/plots/ (median and 5-95 % range per climate path).",
         "Exit status: 0 done, 1 failure, 2 bad input (nothing written)."})
 public final class SimulateCommand implements Callable<Integer> {
   @Spec
@@ -86,6 +88,9 @@ public final class SimulateCommand implements Callable<Integer> {
 
   @Option(names = "--no-progress", description = "Do not show the progress bar.")
   boolean noProgress;
+
+  @Option(names = "--no-plots", description = "Do not draw the charts in OUT/plots/.")
+  boolean noPlots;
 
   @Option(names = "--debug", description = "Show stack traces of failures.")
   boolean debug;
@@ -184,10 +189,17 @@ public final class SimulateCommand implements Callable<Integer> {
       Instant finished = Instant.now();
       String provenance = provenance(loaded, policy, pathNames, study, workers, started,
           finished);
-      Map<Path, IoConsumer<Writer>> files = new LinkedHashMap<>();
-      files.put(csv, w -> TrajectoryCsv.write(w, study.parameters(), pathNames, written));
-      files.put(json, w -> w.write(provenance));
-      AtomicFiles.writeAll(files);
+      Map<Path, IoConsumer<OutputStream>> files = new LinkedHashMap<>();
+      files.put(csv, AtomicFiles.text(
+          w -> TrajectoryCsv.write(w, study.parameters(), pathNames, written)));
+      files.put(json, AtomicFiles.text(w -> w.write(provenance)));
+      if (!noPlots) {
+        Path plots = out.resolve("plots");
+        Files.createDirectories(plots);
+        TrajectoryPlots.charts(study.parameters(), pathNames, written, policy.name())
+            .forEach((name, chart) -> files.put(plots.resolve(name), chart));
+      }
+      AtomicFiles.writeAllStreams(files);
 
       stdout.println(SimulationSummary.format(study.parameters(), pathNames, runs,
           policy.name()));
@@ -196,8 +208,9 @@ public final class SimulateCommand implements Callable<Integer> {
           + "the season that starts in Y. Early-dry burns in %s, late-dry burns in %s.%n",
           Seasons.monthName(seasons.firstMonth()), Seasons.monthName(seasons.earlyBurnMonth()),
           Seasons.monthName(seasons.lateBurnMonth()));
-      stdout.printf(Locale.ROOT, "Wrote %s (%d runs) and %s in %.1f s.%n", csv, total,
-          json, Duration.between(started, finished).toMillis() / 1000.0);
+      stdout.printf(Locale.ROOT, "Wrote %s (%d runs), %s%s in %.1f s.%n", csv, total, json,
+          noPlots ? "" : " and the charts in " + out.resolve("plots"),
+          Duration.between(started, finished).toMillis() / 1000.0);
       stdout.println();
       stdout.println(Cautions.TEXT);
       stdout.flush();
@@ -294,6 +307,9 @@ public final class SimulateCommand implements Callable<Integer> {
     root.put("finished", finished.toString());
     ArrayNode files = root.putArray("files");
     files.add("trajectories.csv");
+    if (!noPlots) {
+      files.add("plots/");
+    }
     root.put("cautions", Cautions.TEXT.replace(System.lineSeparator(), " "));
     return json.writeValueAsString(root) + "\n";
   }

@@ -1,7 +1,10 @@
 package veldplan.shared.io;
 
+import java.io.BufferedOutputStream;
 import java.io.BufferedWriter;
 import java.io.IOException;
+import java.io.OutputStream;
+import java.io.OutputStreamWriter;
 import java.io.Writer;
 import java.nio.channels.Channels;
 import java.nio.channels.FileChannel;
@@ -93,10 +96,45 @@ public final class AtomicFiles {
 
   /** {@link #writeAll(Map)} with the moves made by {@code mover}. */
   static void writeAll(Map<Path, IoConsumer<Writer>> contents, Mover mover) throws IOException {
+    writeAllStreams(asStreams(contents), mover);
+  }
+
+  /**
+   * Like {@link #writeAll(Map)} for binary content (images, say) and text mixed: each target's
+   * content is written to an output stream.
+   *
+   * @param contents target file and how to write it, in the order of the moves
+   * @throws IOException if a file cannot be written or moved; no target is then changed
+   */
+  public static void writeAllStreams(Map<Path, IoConsumer<OutputStream>> contents)
+      throws IOException {
+    writeAllStreams(contents, AtomicFiles::atomicMove);
+  }
+
+  /** Text content as stream content, UTF-8. */
+  public static IoConsumer<OutputStream> text(IoConsumer<Writer> content) {
+    return stream -> {
+      Writer writer = new BufferedWriter(new OutputStreamWriter(stream, StandardCharsets.UTF_8));
+      content.accept(writer);
+      writer.flush();
+    };
+  }
+
+  private static Map<Path, IoConsumer<OutputStream>> asStreams(
+      Map<Path, IoConsumer<Writer>> contents) {
+    Map<Path, IoConsumer<OutputStream>> streams = new LinkedHashMap<>();
+    for (Map.Entry<Path, IoConsumer<Writer>> entry : contents.entrySet()) {
+      streams.put(entry.getKey(), text(entry.getValue()));
+    }
+    return streams;
+  }
+
+  static void writeAllStreams(Map<Path, IoConsumer<OutputStream>> contents, Mover mover)
+      throws IOException {
     // Target (absolute) -> temporary holding its new content, in the order of the moves.
     Map<Path, Path> temporaries = new LinkedHashMap<>();
     try {
-      for (Map.Entry<Path, IoConsumer<Writer>> entry : contents.entrySet()) {
+      for (Map.Entry<Path, IoConsumer<OutputStream>> entry : contents.entrySet()) {
         Path absolute = entry.getKey().toAbsolutePath().normalize();
         Path directory = absolute.getParent();
         if (directory == null) {
@@ -109,10 +147,9 @@ public final class AtomicFiles {
         temporaries.put(absolute, temporary);
         try (FileChannel channel = FileChannel.open(temporary, StandardOpenOption.WRITE,
             StandardOpenOption.TRUNCATE_EXISTING)) {
-          Writer writer = new BufferedWriter(
-              Channels.newWriter(channel, StandardCharsets.UTF_8.newEncoder(), -1));
-          entry.getValue().accept(writer);
-          writer.flush();
+          OutputStream stream = new BufferedOutputStream(Channels.newOutputStream(channel));
+          entry.getValue().accept(stream);
+          stream.flush();
           channel.force(true);
         }
       }
