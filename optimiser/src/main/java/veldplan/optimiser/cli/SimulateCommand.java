@@ -193,13 +193,21 @@ public final class SimulateCommand implements Callable<Integer> {
       files.put(csv, AtomicFiles.text(
           w -> TrajectoryCsv.write(w, study.parameters(), pathNames, written)));
       files.put(json, AtomicFiles.text(w -> w.write(provenance)));
+      Path plots = out.resolve("plots");
+      boolean plotsExisted = Files.isDirectory(plots);
       if (!noPlots) {
-        Path plots = out.resolve("plots");
         Files.createDirectories(plots);
         TrajectoryPlots.charts(study.parameters(), pathNames, written, policy.name())
             .forEach((name, chart) -> files.put(plots.resolve(name), chart));
       }
-      AtomicFiles.writeAllStreams(files);
+      try {
+        AtomicFiles.writeAllStreams(files);
+      } catch (IOException | RuntimeException e) {
+        if (!plotsExisted) {
+          deleteIfEmpty(plots);
+        }
+        throw e;
+      }
 
       stdout.println(SimulationSummary.format(study.parameters(), pathNames, runs,
           policy.name()));
@@ -267,6 +275,15 @@ public final class SimulateCommand implements Callable<Integer> {
       return word;
     }
     return "'" + word.replace("'", "'\\''") + "'";
+  }
+
+  /** Removes a folder this run created if it is still empty; leaves anything else alone. */
+  private static void deleteIfEmpty(Path folder) {
+    try {
+      Files.deleteIfExists(folder);
+    } catch (IOException e) {
+      // Not empty, or not ours to remove: leave it.
+    }
   }
 
   private static int commandLineProblems(PrintWriter err, List<String> problems) {
