@@ -1,7 +1,5 @@
 package veldplan.model;
 
-import java.nio.file.Files;
-import java.nio.file.Path;
 import java.util.concurrent.TimeUnit;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
@@ -14,9 +12,6 @@ import org.openjdk.jmh.annotations.Scope;
 import org.openjdk.jmh.annotations.Setup;
 import org.openjdk.jmh.annotations.State;
 import org.openjdk.jmh.annotations.Warmup;
-import veldplan.shared.scenario.LoadedScenario;
-import veldplan.shared.scenario.Scenario;
-import veldplan.shared.scenario.ScenarioReader;
 
 /**
  * The steps of {@link Herbivory#forageAndGraze} one by one on the example park's state after 20
@@ -38,23 +33,11 @@ public class HerbivoryBenchmark {
 
   @Setup(Level.Trial)
   public void setUp() throws Exception {
-    Path file = Path.of("examples/duskveld/scenario.yaml");
-    if (!Files.exists(file)) {
-      file = Path.of("../examples/duskveld/scenario.yaml");
-    }
-    LoadedScenario loaded = ScenarioReader.load(file);
-    Scenario sc = loaded.scenario();
-    Study study = ParametersFromScenario.study(loaded);
-    params = study.parameters();
-    ManagementPlan plan = ParametersFromScenario.plan(sc.policy(), sc);
-    Forcing forcing = study.forcing(0, 0);
-    state = new EcosystemState(params);
-    state.reset(params);
-    for (int year = 0; year < 20; year++) {
-      AnnualCycle.advance(params, plan, forcing, year, state);
-    }
-    AnnualCycle.step(0, params, plan, forcing, 20, state);
-    AnnualCycle.step(1, params, plan, forcing, 20, state);
+    ExamplePark park = ExamplePark.load(0);
+    params = park.study.parameters();
+    state = park.stateAfter(20);
+    AnnualCycle.step(0, params, park.plan, park.study.forcing(0, 0), 20, state);
+    AnnualCycle.step(1, params, park.plan, park.study.forcing(0, 0), 20, state);
   }
 
   @Benchmark

@@ -1,7 +1,5 @@
 package veldplan.model;
 
-import java.nio.file.Files;
-import java.nio.file.Path;
 import java.util.concurrent.TimeUnit;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
@@ -15,9 +13,6 @@ import org.openjdk.jmh.annotations.Scope;
 import org.openjdk.jmh.annotations.Setup;
 import org.openjdk.jmh.annotations.State;
 import org.openjdk.jmh.annotations.Warmup;
-import veldplan.shared.scenario.LoadedScenario;
-import veldplan.shared.scenario.Scenario;
-import veldplan.shared.scenario.ScenarioReader;
 
 /**
  * One process of the yearly cycle on the example park's state after 20 years, to see where a
@@ -41,25 +36,14 @@ public class ProcessBenchmark {
   ManagementPlan plan;
   Forcing forcing;
   EcosystemState state;
-  EcosystemState saved;
 
   @Setup(Level.Trial)
   public void setUp() throws Exception {
-    Path file = Path.of("examples/duskveld/scenario.yaml");
-    if (!Files.exists(file)) {
-      file = Path.of("../examples/duskveld/scenario.yaml");
-    }
-    LoadedScenario loaded = ScenarioReader.load(file);
-    Scenario sc = loaded.scenario();
-    Study study = ParametersFromScenario.study(loaded);
-    params = study.parameters();
-    plan = ParametersFromScenario.plan(sc.policy(), sc);
-    forcing = study.forcing(0, 0);
-    state = new EcosystemState(params);
-    state.reset(params);
-    for (int year = 0; year < 20; year++) {
-      AnnualCycle.advance(params, plan, forcing, year, state);
-    }
+    ExamplePark park = ExamplePark.load(0);
+    params = park.study.parameters();
+    plan = park.plan;
+    forcing = park.study.forcing(0, 0);
+    state = park.stateAfter(20);
     for (int p = 0; p < process; p++) {
       AnnualCycle.step(p, params, plan, forcing, 20, state);
     }

@@ -1,7 +1,5 @@
 package veldplan.model;
 
-import java.nio.file.Files;
-import java.nio.file.Path;
 import java.util.concurrent.TimeUnit;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
@@ -14,9 +12,6 @@ import org.openjdk.jmh.annotations.Scope;
 import org.openjdk.jmh.annotations.Setup;
 import org.openjdk.jmh.annotations.State;
 import org.openjdk.jmh.annotations.Warmup;
-import veldplan.shared.scenario.LoadedScenario;
-import veldplan.shared.scenario.Scenario;
-import veldplan.shared.scenario.ScenarioReader;
 
 /**
  * A 100-year run of the example park (Duskveld, 6 burn blocks), one replicate, status-quo policy,
@@ -45,21 +40,12 @@ public class SimulatorBenchmark {
 
   @Setup(Level.Trial)
   public void setUp() throws Exception {
-    Path file = Path.of("examples/duskveld/scenario.yaml");
-    if (!Files.exists(file)) {
-      file = Path.of("../examples/duskveld/scenario.yaml");
-    }
-    LoadedScenario loaded = ScenarioReader.load(file);
-    Scenario sc = loaded.scenario();
-    Scenario hundred = new Scenario(sc.name(), sc.startYear(), YEARS, sc.park(), sc.guilds(),
-        sc.predators(), sc.elephants(), sc.climate(), sc.stochastic(), sc.policy(), sc.costs());
-    Study study = ParametersFromScenario.study(new LoadedScenario(loaded.file(), hundred,
-        loaded.baseline(), loaded.pathSeries(), loaded.sha256()));
-    simulator = new Simulator(study.parameters());
-    plan = ParametersFromScenario.plan(hundred.policy(), hundred);
-    forcing = study.forcing(0, 0);
-    state = new EcosystemState(study.parameters());
-    trajectory = new Trajectory(study.parameters());
+    ExamplePark park = ExamplePark.load(YEARS);
+    simulator = new Simulator(park.study.parameters());
+    plan = park.plan;
+    forcing = park.study.forcing(0, 0);
+    state = new EcosystemState(park.study.parameters());
+    trajectory = new Trajectory(park.study.parameters());
   }
 
   /** One 100-year run: 600 block-years. */
