@@ -19,6 +19,8 @@ import java.util.List;
  * @param stochastic    replicates, seed and weather variability
  * @param policy        the management policy simulated unless {@code --policy} gives another
  * @param costs         unit costs of management actions and the discount rate
+ * @param optimisation  how {@code optimise} searches policies; absent = the scenario can be
+ *                      simulated but not optimised
  */
 public record Scenario(
     String name,
@@ -31,22 +33,37 @@ public record Scenario(
     Climate climate,
     Stochastic stochastic,
     Policy policy,
-    Costs costs) {
+    Costs costs,
+    @Optional Optimisation optimisation) {
 
   public Scenario {
     guilds = List.copyOf(guilds);
     predators = List.copyOf(predators);
   }
 
+  /** A scenario without an {@code optimisation} section. */
+  public Scenario(String name, int startYear, int horizonYears, Park park, List<Guild> guilds,
+      List<Predator> predators, Elephants elephants, Climate climate, Stochastic stochastic,
+      Policy policy, Costs costs) {
+    this(name, startYear, horizonYears, park, guilds, predators, elephants, climate, stochastic,
+        policy, costs, null);
+  }
+
   /** The same scenario with another policy (used by {@code --policy}). */
   public Scenario withPolicy(Policy other) {
     return new Scenario(name, startYear, horizonYears, park, guilds, predators, elephants,
-        climate, stochastic, other, costs);
+        climate, stochastic, other, costs, optimisation);
   }
 
   /** The same scenario with other stochastic settings (used by {@code --replicates}, {@code --seed}). */
   public Scenario withStochastic(Stochastic other) {
     return new Scenario(name, startYear, horizonYears, park, guilds, predators, elephants,
-        climate, other, policy, costs);
+        climate, other, policy, costs, optimisation);
+  }
+
+  /** The same scenario with another optimisation section (command-line overrides). */
+  public Scenario withOptimisation(Optimisation other) {
+    return new Scenario(name, startYear, horizonYears, park, guilds, predators, elephants,
+        climate, stochastic, policy, costs, other);
   }
 }

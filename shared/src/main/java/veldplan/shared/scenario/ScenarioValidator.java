@@ -34,7 +34,8 @@ import java.util.function.Function;
  *       {@link #CO2_PATHWAYS};</li>
  *   <li>the baseline CSV and every {@code monthlySeriesCsv} exist, relative to the scenario
  *       file's directory (their content is checked by {@link ClimateTable});</li>
- *   <li>the policy: see {@link #validatePolicy}.</li>
+ *   <li>the policy: see {@link #validatePolicy};</li>
+ *   <li>the optimisation section, if any: see {@link OptimisationRules}.</li>
  * </ul>
  */
 public final class ScenarioValidator {
@@ -66,6 +67,9 @@ public final class ScenarioValidator {
         where, problems);
     climate(scenario.climate(), where, problems);
     problems.addAll(validatePolicy(scenario.policy(), scenario, "/policy", where));
+    if (scenario.optimisation() != null) {
+      OptimisationRules.check(scenario, where, problems);
+    }
     return problems;
   }
 
