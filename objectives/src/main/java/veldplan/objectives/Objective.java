@@ -50,6 +50,29 @@ public record Objective(String name, String label, String unit, Direction direct
     return (value - best) / (worst - best);
   }
 
+  /**
+   * Column name in tables: the name in lower case with underscores, and a unit tag, e.g.
+   * {@code management_cost_usd_pv} or {@code persists_rare_antelope_probability}.
+   */
+  public String column() {
+    String base = name.replace("guild-persists:", "persists:");
+    String tag;
+    if (unit.endsWith(" present value")) {
+      tag = unit.substring(0, unit.length() - " present value".length()) + " pv";
+    } else if (unit.equals("% of park per year")) {
+      tag = "percent per year";
+    } else {
+      tag = unit;
+    }
+    return slug(base) + "_" + slug(tag);
+  }
+
+  /** Lower case letters and digits, runs of anything else as one underscore. */
+  public static String slug(String text) {
+    String s = text.toLowerCase(java.util.Locale.ROOT).replaceAll("[^a-z0-9]+", "_");
+    return s.replaceAll("^_+|_+$", "");
+  }
+
   /** The same objective with other normalisation bounds. */
   public Objective withBounds(double newBest, double newWorst) {
     return new Objective(name, label, unit, direction, step, newBest, newWorst, statistic);

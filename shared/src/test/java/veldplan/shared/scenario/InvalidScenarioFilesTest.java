@@ -142,6 +142,36 @@ class InvalidScenarioFilesTest {
                 "found \"early\" (expected one of \"early-dry\", \"late-dry\"); "
                     + "did you mean \"early-dry\"?")),
 
+        // The optimisation section (OptimisationRules, TreeChecker).
+        scenario("optimisation-typos.yaml",
+            at("/optimisation/objectives/0/measure", 119, 18, "found \"guild-persist\"",
+                "did you mean \"guilds-persist\"?"),
+            at("/optimisation/levers/elephantOfftakeFractionPerYer", 123, 5,
+                "unknown field; did you mean \"elephantOfftakeFractionPerYear\"?")),
+        scenario("optimisation-no-lever.yaml",
+            at("/optimisation/pathPercentile", 121, 19, "found a percentile with overPaths"
+                + " other than \"percentile\""),
+            at("/optimisation/levers", 124, 5, "no lever is searched")),
+        scenario("optimisation-rules.yaml",
+            at("/optimisation/objectives", 119, 5, "found 5 objectives (expected 1 to 4)"),
+            at("/optimisation/objectives/0", 119, 7, "guild-persists without a guild"),
+            at("/optimisation/objectives/1/guild", 120, 41, "found \"kuduu\", which is not a"
+                + " guild", "did you mean \"kudu\"?"),
+            at("/optimisation/objectives/2/guild", 121, 42, "expected guild only with"
+                + " guild-persists"),
+            at("/optimisation/objectives/3", 122, 7, "large-tree-target-met needs a target"),
+            at("/optimisation/overPaths", 124, 14, "found \"percentile\" without"
+                + " pathPercentile"),
+            at("/optimisation/constraints/0", 126, 7, "found a threshold with no limit"),
+            at("/optimisation/constraints/1/atMost", 127, 58, "0.8 is below atLeast 1.2"),
+            at("/optimisation/elephantBandPerKm2/max", 128, 40, "0.5 is not above min 1.5"),
+            at("/optimisation/levers/allowNoPlannedBurning", 130, 28, "found true without"
+                + " fireReturnIntervalYears"),
+            at("/optimisation/levers/burnSeasons", 131, 18, "a season is listed twice"),
+            at("/optimisation/levers/targetFractionBurnt/max", 132, 43, "0.2 is below min 0.8"),
+            at("/optimisation/levers/waterPointClosureYears", 133, 29, "2031 to 2040 leaves the"
+                + " simulated years (expected 2030 <= min <= max <= 2035")),
+
         // Syntax (DocumentParser).
         scenario("duplicate-key.yaml",
             at("/park/blocks/0/areaHa", 10, 7,
