@@ -47,7 +47,7 @@ public record Objective(String name, String label, String unit, Direction direct
    * {@code worst} to 1 (values beyond either end fall outside [0, 1]).
    */
   public double normalised(double value) {
-    return (value - best) / (worst - best);
+    return (value - best) / (worst - best) + 0.0; // + 0.0 turns -0.0 into 0.0
   }
 
   /**
