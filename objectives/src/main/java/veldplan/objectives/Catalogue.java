@@ -131,7 +131,7 @@ public final class Catalogue {
         return guildPersists(guild);
       case LARGE_TREES_KEPT:
         return new Objective("large-trees-kept", "large trees (>5 m) kept", "ratio to start",
-            Direction.MAXIMISE, ReplicateStep.MEAN, 2, 0, this::largeTreesKept);
+            Direction.MAXIMISE, ReplicateStep.MEAN, 4, 0, this::largeTreesKept);
       case LARGE_TREE_TARGET_MET: {
         if (o == null || o.largeTreeTargetPerHa() == null) {
           throw new IllegalArgumentException("large-tree-target-met needs largeTreeTargetPerHa");
@@ -157,7 +157,7 @@ public final class Catalogue {
       }
       case FIRE_TRAP_ESCAPE:
         return new Objective("fire-trap-escape", "trees escaping the fire trap (2-5 m)",
-            "ratio to start", Direction.MAXIMISE, ReplicateStep.MEAN, 2, 0, this::midTreesKept);
+            "ratio to start", Direction.MAXIMISE, ReplicateStep.MEAN, 4, 0, this::midTreesKept);
       default:
         throw new IllegalArgumentException("unknown measure " + measure);
     }

@@ -7,7 +7,7 @@ import picocli.CommandLine.Command;
 @Command(name = "veldplan", mixinStandardHelpOptions = true,
     versionProvider = Main.Version.class,
     description = "Simulates savanna parks under management policies and climate paths.",
-    subcommands = {SimulateCommand.class, CommandLine.HelpCommand.class})
+    subcommands = {SimulateCommand.class, OptimiseCommand.class, CommandLine.HelpCommand.class})
 public final class Main implements Runnable {
   @CommandLine.Spec
   CommandLine.Model.CommandSpec spec;

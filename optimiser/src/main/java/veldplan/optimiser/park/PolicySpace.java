@@ -26,7 +26,8 @@ import veldplan.shared.scenario.WaterPlan;
  *       deterministic decoding);</li>
  *   <li>a continuous lever is {@code min + u (max - min)}, rounded to the resolution a park can
  *       carry out: 0.01 for shares, 0.001 per year for offtake, 0.01 elephants/km2 for the
- *       trigger.</li>
+ *       trigger. Offtake and contraception with a lower bound of 0 keep the lowest tenth of the
+ *       gene for "not at all" ({@link #withOff}).</li>
  * </ul>
  * The decoded policy is canonical: a lever that has no effect (season and target of a block with
  * no planned burning, the closure year of a block with no open point, the trigger when elephants
@@ -40,6 +41,8 @@ public final class PolicySpace {
   static final double OFFTAKE_STEP = 0.001;
   /** Resolution of the trigger density (elephants/km2). */
   static final double TRIGGER_STEP = 0.01;
+  /** Share of a rate gene's interval that means "not at all" when the rate's lower bound is 0. */
+  static final double OFF_ZONE = 0.1;
 
   /** What a gene sets. */
   public enum Kind {
@@ -212,11 +215,11 @@ public final class PolicySpace {
           break;
         }
         case OFFTAKE:
-          offtake = between(x, levers.elephantOfftakeFractionPerYear().min(),
+          offtake = withOff(x, levers.elephantOfftakeFractionPerYear().min(),
               levers.elephantOfftakeFractionPerYear().max(), OFFTAKE_STEP);
           break;
         case CONTRACEPTION:
-          coverage = between(x, levers.contraceptionCoverage().min(),
+          coverage = withOff(x, levers.contraceptionCoverage().min(),
               levers.contraceptionCoverage().max(), SHARE_STEP);
           break;
         case TRIGGER:
@@ -230,12 +233,10 @@ public final class PolicySpace {
 
     List<BurnPlan> burning = new ArrayList<>();
     List<WaterPlan> water = new ArrayList<>();
-    BurnSeason quiet = seasons.isEmpty() ? BurnSeason.EARLY_DRY : seasons.get(0);
     for (int b = 0; b < blocks; b++) {
-      if (interval[b] == null) {
-        // No planned burning: season and target have no effect; one canonical value.
-        burning.add(new BurnPlan(blockNames.get(b), null, quiet, 0));
-      } else {
+      // A block with no planned burning is left out of the list (that is what absent means),
+      // so its season and target, which have no effect, cannot tell two policies apart.
+      if (interval[b] != null) {
         burning.add(new BurnPlan(blockNames.get(b), interval[b], season[b], target[b]));
       }
       Integer year = open[b] == 0 ? null : closure[b];
@@ -249,6 +250,89 @@ public final class PolicySpace {
     return new Policy(name, burning, new ElephantPlan(offtake, coverage, trigger), water);
   }
 
+  /**
+   * Genes that decode to {@code policy}, or to the nearest policy the levers allow where it
+   * lies outside their bounds: each ordered lever at the middle of its level's interval, each
+   * continuous lever at its value's position between the bounds. Used to start the search
+   * from policies the managers know (the one in use, no intervention).
+   */
+  public double[] encode(Policy policy) {
+    double[] u = new double[genes.size()];
+    for (int i = 0; i < u.length; i++) {
+      Gene gene = genes.get(i);
+      int b = gene.block();
+      String block = b >= 0 ? blockNames.get(b) : null;
+      BurnPlan burn = b >= 0 ? burnPlan(policy, block) : null;
+      WaterPlan water = b >= 0 ? waterPlan(policy, block) : null;
+      ElephantPlan e = policy.elephants();
+      switch (gene.kind()) {
+        case INTERVAL: {
+          Levers.YearsRange r = levers.fireReturnIntervalYears();
+          int levels = r.max() - r.min() + 1 + (allowNone() ? 1 : 0);
+          Double interval = burn == null ? null : burn.fireReturnIntervalYears();
+          int k = interval == null ? levels - 1
+              : (int) Math.max(0, Math.min(r.max() - r.min(), Math.round(interval) - r.min()));
+          u[i] = (k + 0.5) / levels;
+          break;
+        }
+        case SEASON: {
+          int k = burn == null ? 0 : Math.max(0, seasons.indexOf(burn.season()));
+          u[i] = (k + 0.5) / seasons.size();
+          break;
+        }
+        case TARGET:
+          u[i] = position(burn == null ? levers.targetFractionBurnt().min()
+              : burn.targetFractionBurnt(), levers.targetFractionBurnt().min(),
+              levers.targetFractionBurnt().max());
+          break;
+        case OPEN_POINTS: {
+          int open = water == null ? waterPoints[b] : Math.min(water.openPoints(), waterPoints[b]);
+          u[i] = (open + 0.5) / (waterPoints[b] + 1);
+          break;
+        }
+        case CLOSURE_YEAR: {
+          Levers.CalendarYearRange r = levers.waterPointClosureYears();
+          int levels = r.max() - r.min() + 2;
+          Integer year = water == null ? null : water.closureYear();
+          int k = year == null ? levels - 1 : Math.max(0, Math.min(r.max() - r.min(),
+              year - r.min()));
+          u[i] = (k + 0.5) / levels;
+          break;
+        }
+        case OFFTAKE:
+          u[i] = ratePosition(e.offtakeFractionPerYear(), levers.elephantOfftakeFractionPerYear()
+              .min(), levers.elephantOfftakeFractionPerYear().max());
+          break;
+        case CONTRACEPTION:
+          u[i] = ratePosition(e.contraceptionCoverage(), levers.contraceptionCoverage().min(),
+              levers.contraceptionCoverage().max());
+          break;
+        case TRIGGER:
+          u[i] = position(e.triggerDensityPerKm2() == null ? 0 : e.triggerDensityPerKm2(),
+              levers.triggerDensityPerKm2().min(), levers.triggerDensityPerKm2().max());
+          break;
+        default:
+          throw new IllegalStateException(gene.kind().toString());
+      }
+    }
+    return u;
+  }
+
+  /** The inverse of {@link #withOff}: 0 in the middle of the off zone. */
+  private static double ratePosition(double v, double min, double max) {
+    if (min > 0) {
+      return position(v, min, max);
+    }
+    if (v <= 0) {
+      return OFF_ZONE / 2;
+    }
+    return OFF_ZONE + (1 - OFF_ZONE) * position(v, 0, max);
+  }
+
+  private static double position(double v, double min, double max) {
+    return Math.max(0, Math.min(1, (v - min) / (max - min)));
+  }
+
   private boolean allowNone() {
     return Boolean.TRUE.equals(levers.allowNoPlannedBurning());
   }
@@ -260,6 +344,22 @@ public final class PolicySpace {
   /** Level {@code min(floor(u K), K - 1)} of K. */
   static int level(double u, int k) {
     return Math.min((int) Math.floor(u * k), k - 1);
+  }
+
+  /**
+   * A rate that may be switched off: when {@code min} is 0, genes below {@link #OFF_ZONE} give
+   * exactly 0 (the action is not taken at all) and the rest of the interval spans (0, max];
+   * otherwise {@link #between}. Without the zone "off" would be a single point the search
+   * could only approach, and fronts would fill with token actions (0.1 % offtake).
+   */
+  static double withOff(double u, double min, double max, double step) {
+    if (min > 0) {
+      return between(u, min, max, step);
+    }
+    if (u < OFF_ZONE) {
+      return 0;
+    }
+    return Math.max(step, between((u - OFF_ZONE) / (1 - OFF_ZONE), 0, max, step));
   }
 
   /** {@code min + u (max - min)} rounded to {@code step}, kept inside [min, max]. */

@@ -314,11 +314,14 @@ public record FrontReport(String scenarioName, List<String> blocks, int[] waterP
         + " replicates per climate path (%s); 95 %% intervals in brackets.%n", front.size(),
         validationReplicates, pathStep.describe()));
     List<String> header = new ArrayList<>(List.of("policy"));
+    List<String> legend = new ArrayList<>();
     for (int k = 0; k < objectives; k++) {
       Objective m = measures.get(k);
-      header.add(m.label() + " (" + m.unit() + ", " + (m.direction() == Direction.MAXIMISE
-          ? "higher" : "lower") + " is better)");
+      header.add(m.label());
+      legend.add(m.label() + ": " + m.unit() + ", " + (m.direction() == Direction.MAXIMISE
+          ? "higher" : "lower") + " is better");
     }
+    out.append(String.join("; ", legend)).append('.').append(System.lineSeparator());
     if (!limits.isEmpty()) {
       header.add("meets thresholds");
     }
@@ -339,8 +342,8 @@ public record FrontReport(String scenarioName, List<String> blocks, int[] waterP
     }
     out.append(table(header, rows));
     if (front.stream().anyMatch(FrontEntry::dominated)) {
-      out.append("* dominated by another front policy on the fresh replicates (it was not in"
-          + " the search).").append(System.lineSeparator());
+      out.append("* dominated by another front policy on the fresh replicates, though not on"
+          + " the search's replicates.").append(System.lineSeparator());
     }
     out.append(System.lineSeparator());
     FrontEntry pick = pick();

@@ -148,6 +148,34 @@ public final class Nsga2 {
    * @return the final population and the archive
    */
   public SearchResult run(SearchListener listener) {
+    return run(List.of(), listener);
+  }
+
+  /**
+   * Runs the search from an initial population that starts with known gene vectors (for
+   * example the policy in use today), the rest random. The random individuals are drawn as in
+   * {@link #run(SearchListener)}, and the first {@code seeds.size()} of them are replaced by the
+   * seeds, so a run with no seeds is that run.
+   *
+   * @param seeds    at most N gene vectors of length n, each gene in [0, 1]
+   * @param listener called after every generation, 0 included
+   * @return the final population and the archive
+   */
+  public SearchResult run(List<double[]> seeds, SearchListener listener) {
+    if (seeds.size() > settings.populationSize()) {
+      throw new IllegalArgumentException(seeds.size() + " seeds for a population of "
+          + settings.populationSize());
+    }
+    for (double[] seed : seeds) {
+      if (seed.length != n) {
+        throw new IllegalArgumentException("a seed has " + seed.length + " genes, expected " + n);
+      }
+      for (double g : seed) {
+        if (!(g >= 0 && g <= 1)) {
+          throw new IllegalArgumentException("a seed gene is not in [0, 1]: " + g);
+        }
+      }
+    }
     long startNanos = System.nanoTime();
     Run run = new Run(new CachingEvaluator(problem, codec, 0, 0, 0), new ParetoArchive(m), 0,
         startNanos, listener);
@@ -157,6 +185,13 @@ public final class Nsga2 {
             .limit(settings.populationSize())
             .map(gt -> Phenotype.<DoubleGene, Fitness>of(gt, 0))
             .collect(ISeq.toISeq()));
+    if (!seeds.isEmpty()) {
+      MSeq<Phenotype<DoubleGene, Fitness>> seeded = initial.copy();
+      for (int k = 0; k < seeds.size(); k++) {
+        seeded.set(k, Phenotype.of(codec.encode(seeds.get(k)), 0));
+      }
+      initial = seeded.toISeq();
+    }
     ISeq<Phenotype<DoubleGene, Fitness>> population = run.evaluator.eval(initial);
     for (Phenotype<DoubleGene, Fitness> pt : population) {
       run.archive.offer(pt.fitness().individual());

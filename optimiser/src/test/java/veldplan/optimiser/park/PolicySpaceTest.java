@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNotEquals;
 import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
 import java.nio.file.Files;
@@ -60,10 +61,8 @@ class PolicySpaceTest {
     double[] u = new double[SPACE.size()];
     Arrays.fill(u, 1);
     Policy p = SPACE.decode(u, "x");
-    for (BurnPlan burn : p.burning()) {
-      // "No planned burning" is the level after the longest interval.
-      assertNull(burn.fireReturnIntervalYears());
-    }
+    // "No planned burning" is the level after the longest interval; such blocks are left out.
+    assertEquals(List.of(), p.burning());
     for (int b = 0; b < 6; b++) {
       WaterPlan water = p.waterPoints().get(b);
       assertEquals(SCENARIO.park().blocks().get(b).artificialWaterPoints(), water.openPoints());
@@ -83,9 +82,29 @@ class PolicySpaceTest {
     u[0] = 0.874;
     assertEquals(8.0, SPACE.decode(u, "x").burning().get(0).fireReturnIntervalYears());
     u[0] = 0.876;
-    assertNull(SPACE.decode(u, "x").burning().get(0).fireReturnIntervalYears());
+    assertEquals("Copperflat", SPACE.decode(u, "x").burning().get(0).block());
     assertEquals(3, PolicySpace.level(0.5, 7));
     assertEquals(6, PolicySpace.level(1.0, 7));
+  }
+
+  @Test
+  void ratesWithALowerBoundOfZeroHaveAnOffZone() {
+    assertEquals(0, PolicySpace.withOff(0.05, 0, 0.08, PolicySpace.OFFTAKE_STEP));
+    assertEquals(0.001, PolicySpace.withOff(0.1, 0, 0.08, PolicySpace.OFFTAKE_STEP));
+    assertEquals(0.04, PolicySpace.withOff(0.55, 0, 0.08, PolicySpace.OFFTAKE_STEP));
+    assertEquals(0.08, PolicySpace.withOff(1, 0, 0.08, PolicySpace.OFFTAKE_STEP));
+    assertEquals(0.5, PolicySpace.withOff(0, 0.5, 0.7, PolicySpace.SHARE_STEP));
+  }
+
+  @Test
+  void encodeThenDecodeGivesThePolicyBack() {
+    Policy status = SCENARIO.policy();
+    Policy back = SPACE.decode(SPACE.encode(status), status.name());
+    assertEquals(status.elephants(), back.elephants());
+    assertEquals(status.waterPoints(), back.waterPoints());
+    for (BurnPlan burn : status.burning()) {
+      assertTrue(back.burning().contains(burn), burn.toString());
+    }
   }
 
   @Test
@@ -118,7 +137,8 @@ class PolicySpaceTest {
     assertEquals(1, space.size());
     Policy p = space.decode(new double[] {0.5}, "x");
     assertEquals(SCENARIO.policy().burning(), p.burning());
-    assertEquals(0.04, p.elephants().offtakeFractionPerYear());
+    assertEquals(PolicySpace.withOff(0.5, 0, 0.08, PolicySpace.OFFTAKE_STEP),
+        p.elephants().offtakeFractionPerYear());
     assertEquals(SCENARIO.policy().elephants().contraceptionCoverage(),
         p.elephants().contraceptionCoverage());
   }
