@@ -13,9 +13,11 @@ import veldplan.objectives.Objective;
 import veldplan.objectives.PathStep;
 import veldplan.optimiser.report.FrontEntry;
 import veldplan.optimiser.report.FrontReport;
+import veldplan.optimiser.search.Hypervolume;
 import veldplan.optimiser.search.Individual;
 import veldplan.optimiser.search.Nsga2;
 import veldplan.optimiser.search.Nsga2Settings;
+import veldplan.optimiser.search.RandomSearch;
 import veldplan.optimiser.search.SearchListener;
 import veldplan.optimiser.search.SearchResult;
 import veldplan.optimiser.search.SearchState;
@@ -200,6 +202,36 @@ public final class PolicySearch implements AutoCloseable {
     // Start from the policies the managers know, beside random ones.
     List<double[]> seeds = List.of(space.encode(scenario.policy()), space.encode(noIntervention()));
     return nsga2.run(seeds.subList(0, Math.min(seeds.size(), settings.population())), listener);
+  }
+
+  /**
+   * Random search with a budget of evaluations on the same problem, for comparison with the
+   * genetic algorithm (same replicates, same objectives and thresholds, same archive rule).
+   */
+  public List<Individual> randomSearch(long budget, long seed) {
+    ParkProblem problem = new ParkProblem(space, evaluator, objectiveCount, searchLimits,
+        settings.replicates(), () -> { });
+    return RandomSearch.run(problem, budget, settings.population(), seed);
+  }
+
+  /**
+   * Hypervolume of the feasible members of an archive in the search's normalised objective
+   * space (0 = best, 1 = worst plausible value; reference point 1.1 in each objective), 0 if
+   * none is feasible.
+   */
+  public static double hypervolume(List<Individual> archive) {
+    List<double[]> points = new ArrayList<>();
+    for (Individual i : archive) {
+      if (i.evaluation().violation() == 0) {
+        points.add(i.objectives());
+      }
+    }
+    if (points.isEmpty()) {
+      return 0;
+    }
+    double[] reference = new double[points.get(0).length];
+    Arrays.fill(reference, Hypervolume.NORMALISED_REFERENCE);
+    return Hypervolume.of(points, reference);
   }
 
   /** Runs of the out-of-sample check for a front of {@code policies} policies. */
