@@ -26,13 +26,15 @@ final class CachingEvaluator implements Evaluator<DoubleGene, Fitness> {
   private final SearchProblem problem;
   private final InvertibleCodec<double[], DoubleGene> codec;
   private final int objectives;
-  private final Map<GeneKey, Fitness> cache = new HashMap<>();
+  private final Map<GeneKey, Fitness> cache;
   private long requested;
   private long simulated;
   private long evaluateNanos;
 
   CachingEvaluator(SearchProblem problem, InvertibleCodec<double[], DoubleGene> codec,
-      long requested, long simulated, long evaluateNanos) {
+      long requested, long simulated, long evaluateNanos, long expectedSize) {
+    // Sized for the whole run, so the map never rehashes.
+    this.cache = new HashMap<>((int) Math.min(1 << 30, expectedSize * 4 / 3 + 16));
     this.problem = problem;
     this.codec = codec;
     this.objectives = problem.objectives();

@@ -53,19 +53,30 @@ public final class NonDominatedSorting {
    * @return the fronts, best first
    */
   public static int[][] fronts(double[] objectives, double[] violations, int n, int m) {
+    // Visit the solutions in lexicographic order of (violation, f1, ..., fM), a linear extension
+    // of constrained domination: a later one can never dominate an earlier one, so each pair needs
+    // a one-way test, which usually fails at its first objective.
+    Integer[] byValue = new Integer[n];
+    for (int i = 0; i < n; i++) {
+      byValue[i] = i;
+    }
+    Arrays.sort(byValue, (a, b) -> {
+      int c = Double.compare(violations[a], violations[b]);
+      return c != 0 ? c
+          : Arrays.compare(objectives, a * m, a * m + m, objectives, b * m, b * m + m);
+    });
     int[] dominatedByCount = new int[n];
     int[][] dominates = new int[n][];
     int[] dominatesSize = new int[n];
-    for (int p = 0; p < n; p++) {
-      for (int q = p + 1; q < n; q++) {
-        int c = Dominance.constrained(objectives, p * m, violations[p], objectives, q * m,
-            violations[q], m);
-        if (c < 0) {
+    for (int a = 0; a < n; a++) {
+      int p = byValue[a];
+      double vp = violations[p];
+      int base = p * m;
+      for (int b = a + 1; b < n; b++) {
+        int q = byValue[b];
+        if (dominatesLater(objectives, base, vp, q * m, violations[q], m)) {
           add(dominates, dominatesSize, p, q);
           dominatedByCount[q]++;
-        } else if (c > 0) {
-          add(dominates, dominatesSize, q, p);
-          dominatedByCount[p]++;
         }
       }
     }
@@ -94,6 +105,26 @@ public final class NonDominatedSorting {
       Arrays.sort(current, 0, currentSize);
     }
     return Arrays.copyOf(fronts, frontCount);
+  }
+
+  /**
+   * Whether p constrained-dominates q, given that p does not come after q in lexicographic order
+   * of (violation, objectives).
+   */
+  private static boolean dominatesLater(double[] f, int p, double vp, int q, double vq, int m) {
+    if (vp > 0 || vq > 0) {
+      return vp < vq;
+    }
+    boolean strictly = false;
+    for (int j = 0; j < m; j++) {
+      double a = f[p + j];
+      double b = f[q + j];
+      if (a > b) {
+        return false;
+      }
+      strictly |= a < b;
+    }
+    return strictly;
   }
 
   /** Rank (0 = first front) of every solution, from its fronts. */

@@ -1,10 +1,10 @@
 package veldplan.optimiser.search;
 
+import io.jenetics.DoubleChromosome;
 import io.jenetics.DoubleGene;
 import io.jenetics.Genotype;
 import io.jenetics.Optimize;
 import io.jenetics.Phenotype;
-import io.jenetics.engine.Codecs;
 import io.jenetics.engine.EvolutionDurations;
 import io.jenetics.engine.EvolutionResult;
 import io.jenetics.engine.EvolutionStart;
@@ -53,7 +53,9 @@ import java.util.random.RandomGeneratorFactory;
  * As in the paper and its reference code, the crowding distances used for mating in step 2 are
  * those of step 5 of the previous generation, computed on the whole fronts of R (for the front
  * that was cut, on all of it, survivors or not); for generation 0 they are computed on the
- * initial population. The ranks are recomputed on P<sub>t</sub>, which gives the same values.
+ * initial population. The ranks are those of R too; on P<sub>t</sub> alone they would be the
+ * same (whole fronts survive, and the cut front is still dominated only by earlier fronts), which
+ * is how a resumed run recomputes them.
  * (Recomputing the distances on P<sub>t</sub> alone was measured as worse: median population
  * hypervolume over 15 seeds on 3-objective DTLZ2 0.6998 instead of 0.7042.) Because these
  * distances depend on individuals that did not survive, a {@link SearchState} carries them.
@@ -61,8 +63,8 @@ import java.util.random.RandomGeneratorFactory;
  * <h2>Jenetics</h2>
  * Genotypes are Jenetics {@code Genotype<DoubleGene>}: one {@code DoubleChromosome} of n genes on
  * [0, 1] (the gene range is [0, nextUp(1)) because Jenetics' upper bound is exclusive and the
- * operators may return exactly 1). A {@link Codecs#ofVector(DoubleRange, int)} codec turns them
- * into {@code double[]}. The generation step above is an {@link io.jenetics.engine.Evolution},
+ * operators may return exactly 1). An {@link InvertibleCodec} turns them into {@code double[]}
+ * and back. The generation step above is an {@link io.jenetics.engine.Evolution},
  * driven by {@link EvolutionStream#ofEvolution}. Jenetics' built-in engine is not used: its
  * survivors are selected from the old population only and its crowding distance is computed
  * over the whole population, not per front (deps.md §1), and its SBX is not textbook
@@ -137,7 +139,24 @@ public final class Nsga2 {
       }
     }
     this.mutationProbability = settings.mutationProbability(n);
-    this.codec = Codecs.ofVector(UNIT, n);
+    this.codec = unitCodec(n);
+  }
+
+  /**
+   * The codec of n genes on [0, 1]: the same mapping as {@code Codecs.ofVector(UNIT, n)}, with
+   * plain loops instead of streams (it runs twice per child) and one shared gene range.
+   */
+  static InvertibleCodec<double[], DoubleGene> unitCodec(int n) {
+    return InvertibleCodec.of(
+        Genotype.of(DoubleChromosome.of(UNIT, n)),
+        gt -> ((DoubleChromosome) gt.chromosome()).toArray(),
+        values -> {
+          DoubleGene[] genes = new DoubleGene[values.length];
+          for (int i = 0; i < values.length; i++) {
+            genes[i] = DoubleGene.of(values[i], UNIT);
+          }
+          return Genotype.of(DoubleChromosome.of(genes));
+        });
   }
 
   /**
@@ -177,7 +196,8 @@ public final class Nsga2 {
       }
     }
     long startNanos = System.nanoTime();
-    Run run = new Run(new CachingEvaluator(problem, codec, 0, 0, 0), new ParetoArchive(m), 0,
+    Run run = new Run(new CachingEvaluator(problem, codec, 0, 0, 0,
+        settings.totalEvaluations()), new ParetoArchive(m), 0,
         startNanos, listener);
     RandomGenerator random = generator(settings.seed(), 0);
     ISeq<Phenotype<DoubleGene, Fitness>> initial = RandomRegistry.with(random, r ->
@@ -226,7 +246,8 @@ public final class Nsga2 {
           + settings.populationSize());
     }
     CachingEvaluator evaluator = new CachingEvaluator(problem, codec, checkpoint.evaluations(),
-        checkpoint.simulatedEvaluations(), checkpoint.evaluateNanos());
+        checkpoint.simulatedEvaluations(), checkpoint.evaluateNanos(),
+        settings.totalEvaluations());
     ParetoArchive archive = new ParetoArchive(m);
     for (Individual i : checkpoint.archive()) {
       checkShape(i);
@@ -309,6 +330,8 @@ public final class Nsga2 {
     ISeq<Phenotype<DoubleGene, Fitness>> population;
     /** Crowding distances of {@code population} for mating (see the class comment). */
     double[] crowding;
+    /** Ranks of {@code population} (0 = first front), from its survival; null = compute. */
+    int[] rank;
     int generation;
 
     Run(CachingEvaluator evaluator, ParetoArchive archive, long previousElapsedNanos,
@@ -374,12 +397,14 @@ public final class Nsga2 {
       ISeq<Phenotype<DoubleGene, Fitness>> parents = start.population();
       int size = parents.size();
 
-      // 1-2. Rank P_t (crowding comes from the previous survival), crowded tournaments.
+      // 1-2. Crowded tournaments on the ranks and crowding of the previous survival.
       double[] objectives = new double[size * m];
       double[] violations = new double[size];
       flatten(parents, objectives, violations, 0, m);
-      int[][] fronts = NonDominatedSorting.fronts(objectives, violations, size, m);
-      int[] rank = NonDominatedSorting.ranks(fronts, size);
+      if (rank == null) { // generation 1, or resumed: ranks on P_t equal those on R (see above)
+        rank = NonDominatedSorting.ranks(
+            NonDominatedSorting.fronts(objectives, violations, size, m), size);
+      }
       int[] mates = tournaments(rank, crowding, random);
       long t1 = System.nanoTime();
 
@@ -423,12 +448,16 @@ public final class Nsga2 {
       }
       MSeq<Phenotype<DoubleGene, Fitness>> next = MSeq.ofLength(size);
       double[] nextCrowding = new double[size];
+      int[] nextRank = new int[size];
+      int[] mergedRank = NonDominatedSorting.ranks(mergedFronts, total);
       for (int k = 0; k < size; k++) {
         next.set(k, merged.get(survivors[k]));
         nextCrowding[k] = mergedCrowding[survivors[k]];
+        nextRank[k] = mergedRank[survivors[k]];
       }
       population = next.toISeq();
       crowding = nextCrowding;
+      rank = nextRank;
       long t4 = System.nanoTime();
 
       EvolutionDurations durations = new EvolutionDurations(Duration.ofNanos(t1 - t0),

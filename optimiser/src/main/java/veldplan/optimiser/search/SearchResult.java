@@ -7,8 +7,8 @@ import java.util.List;
  *
  * @param population           the final population (N individuals)
  * @param archive              every non-dominated individual found during the run, under
- *                             constrained domination, one per objective vector, in insertion
- *                             order
+ *                             constrained domination, one per objective vector, sorted by the
+ *                             first objective
  * @param evaluations          evaluations requested (N × (generations + 1))
  * @param simulatedEvaluations gene vectors actually passed to {@link SearchProblem#evaluate}
  *                             (requests minus cache hits)

@@ -21,7 +21,7 @@ import java.util.Objects;
  * @param crowding             the crowding distance of each member of {@code population}, as
  *                             computed when it survived (on whole fronts of P ∪ Q, see
  *                             {@link Nsga2}); used for mating; +&infin; at front boundaries
- * @param archive              the external archive, in insertion order
+ * @param archive              the external archive, in its order (sorted by the first objective)
  * @param evaluateNanos        wall time spent inside {@link SearchProblem#evaluate} so far (ns)
  * @param elapsedNanos         wall time of the run so far (ns), across resumptions
  * @param settings             the run's settings; a resumed run must use the same ones, except
