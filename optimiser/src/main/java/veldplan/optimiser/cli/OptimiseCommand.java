@@ -275,14 +275,15 @@ public final class OptimiseCommand implements Callable<Integer> {
       if (progress != null && checkpoint != null) {
         progress.stepTo(checkpoint.state().generation() + 1);
       }
+      CheckpointWriter checkpoints = new CheckpointWriter(checkpointFile);
       try {
         AtomicLong lastEvaluations = new AtomicLong(
             checkpoint == null ? 0 : checkpoint.state().evaluations());
         AtomicLong lastNanos = new AtomicLong(System.nanoTime());
         result = run.search(checkpoint == null ? null : checkpoint.state(), () -> { },
             (report, state) -> {
-              writeCheckpoint(checkpointFile, new Checkpoint(CHECKPOINT_FORMAT, sha, search,
-                  runSeed, over, state));
+              Checkpoint c = new Checkpoint(CHECKPOINT_FORMAT, sha, search, runSeed, over, state);
+              checkpoints.write(() -> checkpointJson(c));
               long now = System.nanoTime();
               double rate = (report.evaluations() - lastEvaluations.getAndSet(
                   report.evaluations())) / Math.max(1e-9, (now - lastNanos.getAndSet(now)) / 1e9);
@@ -297,6 +298,7 @@ public final class OptimiseCommand implements Callable<Integer> {
               }
             });
       } finally {
+        checkpoints.close();
         if (progress != null) {
           progress.close();
         }
@@ -389,12 +391,11 @@ public final class OptimiseCommand implements Callable<Integer> {
   record Checkpoint(String format, String scenarioSha256, SearchSettings search, long seed,
       String overPaths, SearchState state) {}
 
-  private static void writeCheckpoint(Path file, Checkpoint c) {
+  private static String checkpointJson(Checkpoint c) {
     try {
-      AtomicFiles.writeString(file, JSON.writeValueAsString(c) + "\n");
+      return JSON.writeValueAsString(c) + "\n";
     } catch (IOException e) {
-      throw new IllegalStateException("could not write the checkpoint " + file + ": "
-          + e.getMessage(), e);
+      throw new IllegalStateException("could not write the checkpoint: " + e.getMessage(), e);
     }
   }
 

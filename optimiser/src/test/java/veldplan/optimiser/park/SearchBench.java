@@ -16,17 +16,32 @@ import veldplan.shared.scenario.ScenarioReader;
  * of it spent outside the simulations (the genetic algorithm's bookkeeping), the hypervolume of
  * the feasible archive, and the hypervolume random search reaches with the same budget.
  *
- * <pre>mvn -q -B -Pbench-search -pl optimiser -am verify [-Dbench.search.args="SCENARIO SEEDS THREADS"]</pre>
+ * <pre>mvn -q -B -Pbench-search -pl optimiser -am verify [-Dbench.search.args="--seeds 3 --threads 2"]</pre>
  */
 public final class SearchBench {
   private SearchBench() {}
 
-  /** Arguments: scenario file, number of seeds (default 3), threads (default all cores). */
+  /** Options: --scenario FILE (default the example), --seeds N (3), --threads N (all cores). */
   public static void main(String[] args) throws Exception {
-    Path file = args.length > 0 && !args[0].isEmpty() ? Path.of(args[0]) : ExampleScenario.file();
-    int seeds = args.length > 1 ? Integer.parseInt(args[1]) : 3;
-    int threads = args.length > 2 ? Integer.parseInt(args[2])
-        : Runtime.getRuntime().availableProcessors();
+    Path file = ExampleScenario.file();
+    int seeds = 3;
+    int threads = Runtime.getRuntime().availableProcessors();
+    for (int i = 0; i + 1 < args.length; i += 2) {
+      switch (args[i]) {
+        case "--scenario":
+          file = Path.of(args[i + 1]);
+          break;
+        case "--seeds":
+          seeds = Integer.parseInt(args[i + 1]);
+          break;
+        case "--threads":
+          threads = Integer.parseInt(args[i + 1]);
+          break;
+        default:
+          throw new IllegalArgumentException("unknown option " + args[i]
+              + " (expected --scenario, --seeds, --threads)");
+      }
+    }
     LoadedScenario loaded = ScenarioReader.load(file);
     Optimisation o = loaded.scenario().optimisation();
     System.out.printf(Locale.ROOT, "%s: population %d, generations %d, %d paths x %d replicates,"
