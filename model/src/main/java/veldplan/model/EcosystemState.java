@@ -71,18 +71,17 @@ public final class EcosystemState {
   final double[] tallShare;
   /** Resource shares p[herbivore * categories + category], categories = blocks * 4. */
   final double[] resourceShare;
-  /** 1 / (reach x acceptance) [herbivore * categories + category]; 0 where unusable. */
-  final double[] inverseUsable;
-  /** Scratch: demand falling where one herbivore feeds, per category. */
-  final double[] competingKg;
-  /** 1 / usable supply per category this year; 0 where there is none. */
-  final double[] inverseSupply;
+  /** Reach x acceptance [herbivore * categories + category], kept by Herbivory.updateReach. */
+  final double[] usableWeight;
   /** This year's demand on forage shared with others, head x intake / coarse factor (kg). */
   final double[] sharedDemandKg;
-  /** Overlap weights [(h * herbivores + o) * categories + category], kept by Herbivory. */
-  final double[] overlap;
-  /** Demand per category per unit of reach and acceptance [herbivore * categories + k]. */
-  final double[] demandDensity;
+  /**
+   * Overlap weights [o * POOLS + pool][(h * blocks + block) * 2 + kind], kept by
+   * Herbivory.updateReach (see {@link Herbivory}).
+   */
+  final double[][] overlap;
+  /** Depletion each herbivore meets [pool][(h * blocks + block) * 2 + kind]. */
+  final double[][] depletion;
   final double[] nextClasses = new double[TreeClass.COUNT];
 
   /** Names of the arrays {@link #violation()} checks, in the order of {@link #checked}. */
@@ -129,17 +128,16 @@ public final class EcosystemState {
     preyKg = new double[herbivores];
     tallShare = new double[blocks];
     resourceShare = new double[herbivores * blocks * Herbivory.CATEGORIES_PER_BLOCK];
-    inverseUsable = new double[blocks * Herbivory.CATEGORIES_PER_BLOCK * herbivores];
+    usableWeight = new double[herbivores * blocks * Herbivory.CATEGORIES_PER_BLOCK];
     sharedDemandKg = new double[herbivores];
-    competingKg = new double[blocks * Herbivory.CATEGORIES_PER_BLOCK];
-    inverseSupply = new double[blocks * Herbivory.CATEGORIES_PER_BLOCK];
     checked = new double[][] {treesPerHa, leftoverGrassKgPerHa, abundance, predatorAbundance,
         fuelKgPerHa, grassProductionKgPerHa, plannedBurntFraction, wildBurntFraction, reach,
         plannedIntensityKwPerM, wildIntensityKwPerM, basalAreaM2PerHa, lowBrowseKgPerHa,
         highBrowseKgPerHa, browsePressure, elephantsPerKm2, grazedFraction, tallShare,
         grassDiet, forageKg, pressureKg, predationHazard, preyBiomassKg, coverageHistory};
-    overlap = new double[blocks * Herbivory.CATEGORIES_PER_BLOCK * herbivores * herbivores];
-    demandDensity = new double[herbivores * blocks * Herbivory.CATEGORIES_PER_BLOCK];
+    int pooled = herbivores * blocks * Herbivory.KINDS_PER_POOL;
+    overlap = new double[herbivores * Herbivory.POOLS][pooled];
+    depletion = new double[Herbivory.POOLS][pooled];
   }
 
   /** Sets the state to the scenario's initial conditions. */
