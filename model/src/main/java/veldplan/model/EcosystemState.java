@@ -1,5 +1,7 @@
 package veldplan.model;
 
+import veldplan.model.ecology.Topkill;
+
 /**
  * Mutable state of one run. Confined to one thread; reset, never reallocated, between runs.
  * Indexing: [block], [block * TreeClass.COUNT + k], [herbivore] (elephants last),
@@ -69,10 +71,14 @@ public final class EcosystemState {
   // ---- scratch
   /** Tall-grass share of this year's production [block]. */
   final double[] tallShare;
-  /** Resource shares p[herbivore * categories + category], categories = blocks * 4. */
-  final double[] resourceShare;
-  /** Reach x acceptance [herbivore * categories + category], kept by Herbivory.updateReach. */
-  final double[] usableWeight;
+  /** Resource shares p_hk [pool][(herbivore * blocks + block) * 2 + kind of the pool]. */
+  final double[][] resourceShare;
+  /** Reach x acceptance, same indexing, kept by Herbivory.updateReach. */
+  final double[][] usableWeight;
+  /** Scratch: share x depletion [pool][(h * blocks + block) * 2 + kind]. */
+  final double[][] pressureTerm;
+  /** Scratch: share of its forage h gets in each category, same indexing. */
+  final double[][] demandMet;
   /** This year's demand on forage shared with others, head x intake / coarse factor (kg). */
   final double[] sharedDemandKg;
   /**
@@ -83,6 +89,12 @@ public final class EcosystemState {
   /** Depletion each herbivore meets [pool][(h * blocks + block) * 2 + kind]. */
   final double[][] depletion;
   final double[] nextClasses = new double[TreeClass.COUNT];
+  /**
+   * Topkill height factor of each tree class, {@code Topkill.heightFactor} of its height with
+   * the fire parameters' coefficients; depends on the parameters only, set by the constructor
+   * and {@link #reset}.
+   */
+  final double[] topkillHeightFactor = new double[TreeClass.COUNT];
 
   /** Names of the arrays {@link #violation()} checks, in the order of {@link #checked}. */
   private static final String[] CHECKED_NAMES = {"treesPerHa", "leftoverGrassKgPerHa",
@@ -127,8 +139,6 @@ public final class EcosystemState {
     preyBiomassKg = new double[predators];
     preyKg = new double[herbivores];
     tallShare = new double[blocks];
-    resourceShare = new double[herbivores * blocks * Herbivory.CATEGORIES_PER_BLOCK];
-    usableWeight = new double[herbivores * blocks * Herbivory.CATEGORIES_PER_BLOCK];
     sharedDemandKg = new double[herbivores];
     checked = new double[][] {treesPerHa, leftoverGrassKgPerHa, abundance, predatorAbundance,
         fuelKgPerHa, grassProductionKgPerHa, plannedBurntFraction, wildBurntFraction, reach,
@@ -136,8 +146,13 @@ public final class EcosystemState {
         highBrowseKgPerHa, browsePressure, elephantsPerKm2, grazedFraction, tallShare,
         grassDiet, forageKg, pressureKg, predationHazard, preyBiomassKg, coverageHistory};
     int pooled = herbivores * blocks * Herbivory.KINDS_PER_POOL;
+    resourceShare = new double[Herbivory.POOLS][pooled];
+    usableWeight = new double[Herbivory.POOLS][pooled];
+    pressureTerm = new double[Herbivory.POOLS][pooled];
+    demandMet = new double[Herbivory.POOLS][pooled];
     overlap = new double[herbivores * Herbivory.POOLS][pooled];
     depletion = new double[Herbivory.POOLS][pooled];
+    setRunConstants(p);
   }
 
   /** Sets the state to the scenario's initial conditions. */
@@ -151,6 +166,16 @@ public final class EcosystemState {
     System.arraycopy(bp.artificialWaterPoints, 0, waterPointsOpen, 0, blocks);
     java.util.Arrays.fill(coverageHistory, 0);
     java.util.Arrays.fill(grazedFraction, 0);
+    setRunConstants(p);
+  }
+
+  /** The state's constants that depend on the parameters only. */
+  private void setRunConstants(ModelParameters p) {
+    FireParameters fp = p.fire();
+    for (int k = 0; k < TreeClass.COUNT; k++) {
+      topkillHeightFactor[k] = Topkill.heightFactor(p.trees().lnHeight[k],
+          fp.topkillIntercept(), fp.topkillLnHeight());
+    }
   }
 
   /** Trees per ha of class {@code k} in {@code block}. */

@@ -94,12 +94,11 @@ final class Herbivory {
       }
     }
     double[] accept = hp.acceptance;
-    int categories = blocks * CATEGORIES_PER_BLOCK;
     for (int h = 0; h < herbivores; h++) {
       for (int b = 0; b < blocks; b++) {
         for (int c = 0; c < CATEGORIES_PER_BLOCK; c++) {
-          s.usableWeight[h * categories + CATEGORIES_PER_BLOCK * b + c] =
-              s.reach[h * blocks + b] * accept[h * CATEGORIES_PER_BLOCK + c];
+          s.usableWeight[c / KINDS_PER_POOL][(h * blocks + b) * KINDS_PER_POOL
+              + c % KINDS_PER_POOL] = s.reach[h * blocks + b] * accept[h * CATEGORIES_PER_BLOCK + c];
         }
       }
     }
@@ -204,7 +203,6 @@ final class Herbivory {
     HerbivoreParameters hp = p.herbivores();
     int blocks = s.blocks;
     int herbivores = hp.count;
-    int categories = blocks * CATEGORIES_PER_BLOCK;
     // Usable forage per category (tall grass, short grass, low and high browse of each block).
     double[] supply = s.categorySupplyKg;
     for (int b = 0; b < blocks; b++) {
@@ -217,24 +215,28 @@ final class Herbivory {
     }
 
     // What each herbivore can use: supply within its reach that it accepts, split by its diet;
-    // and its shares p_hk of that total.
+    // and its shares p_hk of that total. Kept per pool, [pool][(h * blocks + b) * 2 + kind].
     // (reach x acceptance is kept by updateReach: the same product, in the same order.)
-    double[] share = s.resourceShare;
-    double[] weight = s.usableWeight;
+    double[] grassShares = s.resourceShare[0];
+    double[] browseShares = s.resourceShare[1];
+    double[] grassWeight = s.usableWeight[0];
+    double[] browseWeight = s.usableWeight[1];
     for (int h = 0; h < herbivores; h++) {
       double grassShare = s.grassDiet[h];
       double browseShare = 1 - grassShare;
       double forage = 0;
-      int row = h * categories;
-      for (int at = 0; at < categories; at += CATEGORIES_PER_BLOCK) {
-        double tall = weight[row + at + TALL] * grassShare * supply[at + TALL];
-        double short_ = weight[row + at + SHORT] * grassShare * supply[at + SHORT];
-        double low = weight[row + at + LOW_BROWSE] * browseShare * supply[at + LOW_BROWSE];
-        double high = weight[row + at + HIGH_BROWSE] * browseShare * supply[at + HIGH_BROWSE];
-        share[row + at + TALL] = tall;
-        share[row + at + SHORT] = short_;
-        share[row + at + LOW_BROWSE] = low;
-        share[row + at + HIGH_BROWSE] = high;
+      int row = h * blocks * KINDS_PER_POOL;
+      for (int b = 0; b < blocks; b++) {
+        int j = row + b * KINDS_PER_POOL;
+        int at = CATEGORIES_PER_BLOCK * b;
+        double tall = grassWeight[j] * grassShare * supply[at + TALL];
+        double short_ = grassWeight[j + 1] * grassShare * supply[at + SHORT];
+        double low = browseWeight[j] * browseShare * supply[at + LOW_BROWSE];
+        double high = browseWeight[j + 1] * browseShare * supply[at + HIGH_BROWSE];
+        grassShares[j] = tall;
+        grassShares[j + 1] = short_;
+        browseShares[j] = low;
+        browseShares[j + 1] = high;
         forage += tall;
         forage += short_;
         forage += low;
@@ -243,8 +245,9 @@ final class Herbivory {
       s.forageKg[h] = forage;
       if (forage > 0) {
         double inverse = 1 / forage;
-        for (int c = 0; c < categories; c++) {
-          share[row + c] *= inverse;
+        for (int j = row; j < row + blocks * KINDS_PER_POOL; j++) {
+          grassShares[j] *= inverse;
+          browseShares[j] *= inverse;
         }
       }
     }
@@ -253,12 +256,10 @@ final class Herbivory {
   /** Depletion each herbivore meets, what it gets, and what is eaten where. */
   static void compete(ModelParameters p, EcosystemState s) {
     int e = p.herbivores().elephant;
-    double[] share = s.resourceShare;
     BlockParameters bp = p.blocks();
     HerbivoreParameters hp = p.herbivores();
     int blocks = s.blocks;
     int herbivores = hp.count;
-    int categories = blocks * CATEGORIES_PER_BLOCK;
     int span = herbivores * blocks * KINDS_PER_POOL;
     // Depletion h meets in category k: the demand falling on the part of k it can use, over the
     // supply of that part. Reach areas are nested (around the same water) and so are accepted
@@ -287,8 +288,26 @@ final class Herbivory {
         }
       }
     }
-    double[] grassDepletion = s.depletion[0];
-    double[] browseDepletion = s.depletion[1];
+    // Per category: the share of h's forage times the depletion there, and the share of its
+    // demand met there: all of it unless the category is over-used (depletion above 1), where
+    // it gets share / depletion. Loops over rows indexed alike, which the JIT vectorises.
+    for (int pool = 0; pool < POOLS; pool++) {
+      double[] depletion = s.depletion[pool];
+      double[] shares = s.resourceShare[pool];
+      double[] pressure = s.pressureTerm[pool];
+      double[] got = s.demandMet[pool];
+      for (int j = 0; j < span; j++) {
+        double d = depletion[j];
+        pressure[j] = shares[j] * d;
+        got[j] = shares[j] / Math.max(1, d);
+      }
+    }
+    double[] grassShares = s.resourceShare[0];
+    double[] browseShares = s.resourceShare[1];
+    double[] grassPressure = s.pressureTerm[0];
+    double[] browsePressure = s.pressureTerm[1];
+    double[] grassGot = s.demandMet[0];
+    double[] browseGot = s.demandMet[1];
     double[] grazedKg = s.grazedFraction;
     double[] browsedKg = s.browsePressure;
     double[] elephantUse = s.elephantsPerKm2;
@@ -297,32 +316,38 @@ final class Herbivory {
       browsedKg[b] = 0;
       elephantUse[b] = 0;
     }
+    // Summed category by category (tall, short, low, high of each block); a category h does not
+    // use (share 0) adds nothing.
     for (int h = 0; h < herbivores; h++) {
-      int row = h * categories;
       double demand = sharedDemand[h];
       double pressure = 0;
       for (int b = 0; b < blocks; b++) {
-        int at = row + CATEGORIES_PER_BLOCK * b;
-        int pooled = (h * blocks + b) * KINDS_PER_POOL;
+        int j = (h * blocks + b) * KINDS_PER_POOL;
         double grazed = grazedKg[b];
         double browsed = browsedKg[b];
         double used = 0;
-        for (int c = 0; c < CATEGORIES_PER_BLOCK; c++) {
-          double share_ = share[at + c];
-          if (share_ == 0) {
-            continue;
-          }
-          double d = c < LOW_BROWSE ? grassDepletion[pooled + c]
-              : browseDepletion[pooled + c - LOW_BROWSE];
-          pressure += share_ * d;
-          // Share of its demand met here: all of it unless the category is over-used.
-          double got = d > 1 ? share_ / d : share_;
-          if (c < LOW_BROWSE) {
-            grazed += demand * got;
-          } else if (c == LOW_BROWSE) {
-            browsed += demand * got;
-          }
-          used += share_;
+        double tall = grassShares[j];
+        if (tall != 0) {
+          pressure += grassPressure[j];
+          grazed += demand * grassGot[j];
+          used += tall;
+        }
+        double short_ = grassShares[j + 1];
+        if (short_ != 0) {
+          pressure += grassPressure[j + 1];
+          grazed += demand * grassGot[j + 1];
+          used += short_;
+        }
+        double low = browseShares[j];
+        if (low != 0) {
+          pressure += browsePressure[j];
+          browsed += demand * browseGot[j];
+          used += low;
+        }
+        double high = browseShares[j + 1];
+        if (high != 0) {
+          pressure += browsePressure[j + 1];
+          used += high;
         }
         grazedKg[b] = grazed;
         browsedKg[b] = browsed;
