@@ -1,5 +1,7 @@
 package veldplan.model;
 
+import veldplan.model.ecology.Topkill;
+
 /**
  * Mutable state of one run. Confined to one thread; reset, never reallocated, between runs.
  * Indexing: [block], [block * TreeClass.COUNT + k], [herbivore] (elephants last),
@@ -69,21 +71,30 @@ public final class EcosystemState {
   // ---- scratch
   /** Tall-grass share of this year's production [block]. */
   final double[] tallShare;
-  /** Resource shares p[herbivore * categories + category], categories = blocks * 4. */
-  final double[] resourceShare;
-  /** 1 / (reach x acceptance) [herbivore * categories + category]; 0 where unusable. */
-  final double[] inverseUsable;
-  /** Scratch: demand falling where one herbivore feeds, per category. */
-  final double[] competingKg;
-  /** 1 / usable supply per category this year; 0 where there is none. */
-  final double[] inverseSupply;
+  /** Resource shares p_hk [pool][(herbivore * blocks + block) * 2 + kind of the pool]. */
+  final double[][] resourceShare;
+  /** Reach x acceptance, same indexing, kept by Herbivory.updateReach. */
+  final double[][] usableWeight;
+  /** Scratch: share x depletion [pool][(h * blocks + block) * 2 + kind]. */
+  final double[][] pressureTerm;
+  /** Scratch: share of its forage h gets in each category, same indexing. */
+  final double[][] demandMet;
   /** This year's demand on forage shared with others, head x intake / coarse factor (kg). */
   final double[] sharedDemandKg;
-  /** Overlap weights [(h * herbivores + o) * categories + category], kept by Herbivory. */
-  final double[] overlap;
-  /** Demand per category per unit of reach and acceptance [herbivore * categories + k]. */
-  final double[] demandDensity;
+  /**
+   * Overlap weights [o * POOLS + pool][(h * blocks + block) * 2 + kind], kept by
+   * Herbivory.updateReach (see {@link Herbivory}).
+   */
+  final double[][] overlap;
+  /** Depletion each herbivore meets [pool][(h * blocks + block) * 2 + kind]. */
+  final double[][] depletion;
   final double[] nextClasses = new double[TreeClass.COUNT];
+  /**
+   * Topkill height factor of each tree class, {@code Topkill.heightFactor} of its height with
+   * the fire parameters' coefficients; depends on the parameters only, set by the constructor
+   * and {@link #reset}.
+   */
+  final double[] topkillHeightFactor = new double[TreeClass.COUNT];
 
   /** Names of the arrays {@link #violation()} checks, in the order of {@link #checked}. */
   private static final String[] CHECKED_NAMES = {"treesPerHa", "leftoverGrassKgPerHa",
@@ -128,18 +139,20 @@ public final class EcosystemState {
     preyBiomassKg = new double[predators];
     preyKg = new double[herbivores];
     tallShare = new double[blocks];
-    resourceShare = new double[herbivores * blocks * Herbivory.CATEGORIES_PER_BLOCK];
-    inverseUsable = new double[blocks * Herbivory.CATEGORIES_PER_BLOCK * herbivores];
     sharedDemandKg = new double[herbivores];
-    competingKg = new double[blocks * Herbivory.CATEGORIES_PER_BLOCK];
-    inverseSupply = new double[blocks * Herbivory.CATEGORIES_PER_BLOCK];
     checked = new double[][] {treesPerHa, leftoverGrassKgPerHa, abundance, predatorAbundance,
         fuelKgPerHa, grassProductionKgPerHa, plannedBurntFraction, wildBurntFraction, reach,
         plannedIntensityKwPerM, wildIntensityKwPerM, basalAreaM2PerHa, lowBrowseKgPerHa,
         highBrowseKgPerHa, browsePressure, elephantsPerKm2, grazedFraction, tallShare,
         grassDiet, forageKg, pressureKg, predationHazard, preyBiomassKg, coverageHistory};
-    overlap = new double[blocks * Herbivory.CATEGORIES_PER_BLOCK * herbivores * herbivores];
-    demandDensity = new double[herbivores * blocks * Herbivory.CATEGORIES_PER_BLOCK];
+    int pooled = herbivores * blocks * Herbivory.KINDS_PER_POOL;
+    resourceShare = new double[Herbivory.POOLS][pooled];
+    usableWeight = new double[Herbivory.POOLS][pooled];
+    pressureTerm = new double[Herbivory.POOLS][pooled];
+    demandMet = new double[Herbivory.POOLS][pooled];
+    overlap = new double[herbivores * Herbivory.POOLS][pooled];
+    depletion = new double[Herbivory.POOLS][pooled];
+    setRunConstants(p);
   }
 
   /** Sets the state to the scenario's initial conditions. */
@@ -153,6 +166,16 @@ public final class EcosystemState {
     System.arraycopy(bp.artificialWaterPoints, 0, waterPointsOpen, 0, blocks);
     java.util.Arrays.fill(coverageHistory, 0);
     java.util.Arrays.fill(grazedFraction, 0);
+    setRunConstants(p);
+  }
+
+  /** The state's constants that depend on the parameters only. */
+  private void setRunConstants(ModelParameters p) {
+    FireParameters fp = p.fire();
+    for (int k = 0; k < TreeClass.COUNT; k++) {
+      topkillHeightFactor[k] = Topkill.heightFactor(p.trees().lnHeight[k],
+          fp.topkillIntercept(), fp.topkillLnHeight());
+    }
   }
 
   /** Trees per ha of class {@code k} in {@code block}. */

@@ -58,11 +58,16 @@ final class Fire {
       }
       double rate = fp.wildfireIgnitionsPer100Km2PerYear() * areaKm2[b] / 100 * spread
           * f.curedSeasonFactor[at];
-      double wildIntensity = Trollope.fireIntensityKwPerM(fuel, f.fuelMoistureLatePercent,
-          f.humidityLatePercent[at], wind);
       double wild = 0;
-      if (f.ignitionDraw[at] < 1 - Math.exp(-rate) && wildIntensity > 0) {
-        wild = (1 - planned) * spread * (0.3 + 0.7 * f.extentDraw[at]);
+      double wildIntensity = 0;
+      if (f.ignitionDraw[at] < 1 - Math.exp(-rate)) {
+        // The intensity only matters once a fire is lit (a pure function: computing it here
+        // rather than for every block gives the same numbers).
+        wildIntensity = Trollope.fireIntensityKwPerM(fuel, f.fuelMoistureLatePercent,
+            f.humidityLatePercent[at], wind);
+        if (wildIntensity > 0) {
+          wild = (1 - planned) * spread * (0.3 + 0.7 * f.extentDraw[at]);
+        }
       }
       s.plannedBurntFraction[b] = planned;
       s.plannedIntensityKwPerM[b] = plannedIntensity;

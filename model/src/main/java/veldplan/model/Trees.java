@@ -36,6 +36,7 @@ final class Trees {
     int blocks = s.blocks;
     int e = p.herbivores().elephant;
     double[] next = s.nextClasses;
+    double[] heightFactor = s.topkillHeightFactor;
     for (int b = 0; b < blocks; b++) {
       int at = year * blocks + b;
       int base = b * TreeClass.COUNT;
@@ -50,8 +51,12 @@ final class Trees {
       double reach = s.reach[e * blocks + b];
       double elephantsInReach = reach > 0 ? s.elephantsPerKm2[b] / reach : 0;
       double browse = s.browsePressure[b];
-      double sqrtPlanned = Math.sqrt(s.plannedIntensityKwPerM[b]);
-      double sqrtWild = Math.sqrt(s.wildIntensityKwPerM[b]);
+      // Topkill in the factored form (see Topkill.probabilityOfFactors): one exponential per
+      // fire here, the height factors once per run (EcosystemState.reset).
+      double plannedFactor = planned > 0 ? Topkill.intensityFactor(
+          Math.sqrt(s.plannedIntensityKwPerM[b]), fp.topkillSqrtIntensity()) : 0;
+      double wildFactor = wild > 0 ? Topkill.intensityFactor(
+          Math.sqrt(s.wildIntensityKwPerM[b]), fp.topkillSqrtIntensity()) : 0;
       for (int k = 0; k < TreeClass.COUNT; k++) {
         next[k] = 0;
       }
@@ -59,17 +64,16 @@ final class Trees {
         double n = s.treesPerHa[base + k] * (1 - Math.min(1, t.mortalityPerYear[k] + thinning));
         double topkill = 0;
         if (planned > 0) {
-          topkill += planned * Topkill.probabilityOfTerms(t.lnHeight[k], sqrtPlanned,
-              fp.topkillIntercept(), fp.topkillLnHeight(), fp.topkillSqrtIntensity());
+          topkill += planned * Topkill.probabilityOfFactors(heightFactor[k], plannedFactor);
         }
         if (wild > 0) {
-          topkill += wild * Topkill.probabilityOfTerms(t.lnHeight[k], sqrtWild,
-              fp.topkillIntercept(), fp.topkillLnHeight(), fp.topkillSqrtIntensity());
+          topkill += wild * Topkill.probabilityOfFactors(heightFactor[k], wildFactor);
         }
         double topkilled = n * topkill;
         n -= topkilled;
         double broken = 0;
-        if (elephantsInReach > 0) {
+        // (A class elephants do not break, rate 0, would lose n x reach x 0 = 0: skipped.)
+        if (elephantsInReach > 0 && t.elephantBreakageKm2PerElephant[k] > 0) {
           broken = n * reach
               * (1 - Math.exp(-t.elephantBreakageKm2PerElephant[k] * elephantsInReach));
           n -= broken;

@@ -104,6 +104,46 @@ public final class Topkill {
   }
 
   /**
+   * The height part of the logistic as a factor, exp(-(intercept + a ln H)): with it,
+   * p = 1 / (1 + heightFactor x intensityFactor), see {@link #probabilityOfFactors}. A caller that
+   * evaluates many heights at each of many intensities computes this once per height. No
+   * argument checks.
+   *
+   * @param lnHeight            ln(height in m)
+   * @param intercept           intercept of the logit
+   * @param lnHeightCoefficient a, the coefficient of ln H
+   */
+  public static double heightFactor(double lnHeight, double intercept,
+      double lnHeightCoefficient) {
+    return Math.exp(-(intercept + lnHeightCoefficient * lnHeight));
+  }
+
+  /**
+   * The intensity part of the logistic as a factor, exp(-b sqrt(I)); see {@link #heightFactor}.
+   * No argument checks.
+   *
+   * @param sqrtIntensity            sqrt(fireline intensity in kW/m)
+   * @param sqrtIntensityCoefficient b, the coefficient of sqrt(I)
+   */
+  public static double intensityFactor(double sqrtIntensity, double sqrtIntensityCoefficient) {
+    return Math.exp(-sqrtIntensityCoefficient * sqrtIntensity);
+  }
+
+  /**
+   * The same logistic from its two factors: 1 / (1 + exp(-(intercept + a ln H)) exp(-b sqrt I)),
+   * which is 1 / (1 + exp(-logit)) because exp(x + y) = exp(x) exp(y). It equals
+   * {@link #probabilityOfTerms} up to rounding (a few units in the last place), with one
+   * exponential per intensity instead of one per height and intensity. No argument checks.
+   *
+   * @param heightFactor    {@link #heightFactor} of the tree's height
+   * @param intensityFactor {@link #intensityFactor} of the fire's intensity
+   * @return p (probability), in [0, 1]
+   */
+  public static double probabilityOfFactors(double heightFactor, double intensityFactor) {
+    return 1 / (1 + heightFactor * intensityFactor);
+  }
+
+  /**
    * Topkill probability with one site's coefficients, see
    * {@link #probability(double, double, double, double, double)}.
    *

@@ -47,6 +47,24 @@ class TopkillTest {
     }
   }
 
+  @ParameterizedTest
+  @CsvSource({"MOPANE", "SATARA", "SKUKUZA", "PRETORIUSKOP"})
+  void probabilityOfFactors_overAGrid_equalsTheLogistic(String site) {
+    // [D] exp(x + y) = exp(x) exp(y): the factored form is the same function. Relative 1e-13
+    // for rounding (a few ulps in the exponentials, the product and the sum).
+    Topkill.Coefficients c = coefficients(site);
+    for (double height = 0.05; height <= 40; height *= 1.3) {
+      double heightFactor = Topkill.heightFactor(Math.log(height), c.intercept(),
+          c.lnHeightCoefficient());
+      for (double intensity = 0; intensity <= 20_000; intensity = intensity * 1.4 + 7) {
+        double expected = Topkill.probability(height, intensity, c);
+        double actual = Topkill.probabilityOfFactors(heightFactor,
+            Topkill.intensityFactor(Math.sqrt(intensity), c.sqrtIntensityCoefficient()));
+        assertEquals(expected, actual, 1e-13 * expected, site + " H " + height + " I " + intensity);
+      }
+    }
+  }
+
   @Test
   void siteCoefficients_tableC2_asPublished() {
     // Higgins et al. (2007) Appendix C, Table C2 [V, methods §8.3]: intercept, a, b.
