@@ -15,21 +15,26 @@ import org.jfree.chart.ChartUtils;
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.axis.NumberAxis;
 import org.jfree.chart.labels.XYItemLabelGenerator;
+import org.jfree.chart.plot.ValueMarker;
 import org.jfree.chart.plot.XYPlot;
 import org.jfree.chart.renderer.xy.XYErrorRenderer;
 import org.jfree.chart.title.TextTitle;
+import org.jfree.chart.ui.RectangleAnchor;
+import org.jfree.chart.ui.TextAnchor;
 import org.jfree.data.xy.XYDataset;
 import org.jfree.data.xy.XYIntervalSeries;
 import org.jfree.data.xy.XYIntervalSeriesCollection;
 import veldplan.objectives.Direction;
 import veldplan.objectives.Estimate;
 import veldplan.objectives.Objective;
+import veldplan.optimiser.park.Limit;
 import veldplan.shared.io.IoConsumer;
 
 /**
  * Charts of a front for a room to read on one screen: for each pair of objectives, every front
  * policy as a labelled point with its 95 % intervals as whiskers on both axes, and the
- * reference policies (the scenario's own, no intervention) as differently drawn points. Axis
+ * reference policies (the scenario's own, no intervention) as differently drawn points, and
+ * each threshold on a plotted objective as a dashed line. Axis
  * titles say which way is better. 2-D projections hide dominance in the other objectives: the
  * subtitle says so.
  */
@@ -37,6 +42,7 @@ public final class FrontPlots {
   private static final Color FRONT = new Color(0x1b5e8c);
   private static final Color PICK = new Color(0x2e7d32);
   private static final Color REFERENCE = new Color(0xc0761a);
+  private static final Color THRESHOLD = new Color(0x8e2430);
   private static final int WIDTH = 900;
   private static final int HEIGHT = 640;
 
@@ -121,6 +127,27 @@ public final class FrontPlots {
     plot.setBackgroundPaint(Color.WHITE);
     plot.setDomainGridlinePaint(new Color(0xdddddd));
     plot.setRangeGridlinePaint(new Color(0xdddddd));
+    for (Limit limit : report.limits()) {
+      for (double edge : new double[] {limit.atLeast(), limit.atMost()}) {
+        if (!Double.isFinite(edge)) {
+          continue;
+        }
+        ValueMarker marker = new ValueMarker(edge, THRESHOLD, new BasicStroke(1.5f,
+            BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f, new float[] {6f, 4f}, 0f));
+        marker.setLabel("threshold " + PolicyWords.number(edge));
+        marker.setLabelFont(new Font(Font.SANS_SERIF, Font.PLAIN, 10));
+        marker.setLabelPaint(THRESHOLD);
+        if (limit.measure() == x) {
+          marker.setLabelAnchor(RectangleAnchor.TOP_RIGHT);
+          marker.setLabelTextAnchor(TextAnchor.TOP_LEFT);
+          plot.addDomainMarker(marker);
+        } else if (limit.measure() == y) {
+          marker.setLabelAnchor(RectangleAnchor.TOP_LEFT);
+          marker.setLabelTextAnchor(TextAnchor.BOTTOM_LEFT);
+          plot.addRangeMarker(marker);
+        }
+      }
+    }
     JFreeChart chart = new JFreeChart(oy.label() + " against " + ox.label(),
         new Font(Font.SANS_SERIF, Font.BOLD, 16), plot, true);
     chart.setBackgroundPaint(Color.WHITE);

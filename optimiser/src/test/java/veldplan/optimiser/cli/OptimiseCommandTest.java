@@ -45,8 +45,18 @@ class OptimiseCommandTest {
   @Test
   void writesTheFrontAndPrintsThePick(@TempDir Path dir) throws Exception {
     Path out = dir.resolve("out");
-    CliTestSupport.Result r = run(small(out, "--threads", "2"));
+    List<String> args = small(out, "--threads", "2");
+    args.remove("--no-plots");
+    CliTestSupport.Result r = run(args);
     assertEquals(0, r.exitCode(), r.transcript());
+    // One chart per pair of the three objectives, each a readable PNG.
+    for (String chart : List.of("front-large-trees-kept-vs-guilds-persist.png",
+        "front-management-cost-vs-guilds-persist.png",
+        "front-management-cost-vs-large-trees-kept.png")) {
+      java.awt.image.BufferedImage image =
+          javax.imageio.ImageIO.read(out.resolve("plots").resolve(chart).toFile());
+      assertEquals(900, image.getWidth(), chart);
+    }
     for (String f : List.of("front.csv", "front.json", "run.json")) {
       assertTrue(Files.isRegularFile(out.resolve(f)), f);
     }
