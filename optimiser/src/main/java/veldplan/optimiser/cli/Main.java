@@ -6,7 +6,8 @@ import picocli.CommandLine.Command;
 /** The {@code veldplan} command line. */
 @Command(name = "veldplan", mixinStandardHelpOptions = true,
     versionProvider = Main.Version.class,
-    description = "Simulates savanna parks under management policies and climate paths.",
+    description = "Simulates savanna parks under management policies and climate paths, and"
+        + " searches the policies that trade guild persistence, trees and cost.",
     subcommands = {SimulateCommand.class, OptimiseCommand.class, CommandLine.HelpCommand.class})
 public final class Main implements Runnable {
   @CommandLine.Spec

@@ -55,14 +55,16 @@ import veldplan.shared.scenario.SearchSettings;
 /** {@code veldplan optimise}: searches the Pareto front of management policies. */
 @Command(name = "optimise", aliases = "optimize", mixinStandardHelpOptions = true,
     description = {
-        "Searches the management policies of a scenario (the levers and bounds of its",
-        "optimisation section) with NSGA-II on every climate path and replicate, then scores",
-        "the Pareto front on fresh replicates and picks the minimum-input policy that meets",
-        "the thresholds."},
-    footer = {"", "Writes OUT/front.csv, OUT/front.json, OUT/run.json, one policy file per front"
-        + " policy", "in OUT/policies/ (usable with simulate --policy) and the front charts in"
-        + " OUT/plots/.", "While it runs, OUT/checkpoint.json holds the last generation: an interrupted run",
-        "continues with --resume.", "Exit status: 0 done, 1 failure, 2 bad input (nothing written)."})
+        "Searches the management policies of a scenario (the levers and bounds of",
+        "its optimisation section) with NSGA-II on every climate path and replicate,",
+        "then scores the Pareto front on fresh replicates and picks the",
+        "minimum-input policy that meets the thresholds."},
+    footer = {"",
+        "Writes OUT/front.csv, OUT/front.json, OUT/run.json, one policy file per",
+        "front policy in OUT/policies/ (usable with simulate --policy) and the front",
+        "charts in OUT/plots/. While it runs, OUT/checkpoint.json holds the last",
+        "generation: an interrupted run continues with --resume.",
+        "Exit status: 0 done, 1 failure, 2 bad input (nothing written)."})
 public final class OptimiseCommand implements Callable<Integer> {
   /** Format tag of checkpoint files. */
   static final String CHECKPOINT_FORMAT = "veldplan-optimise-checkpoint/1";
