@@ -289,13 +289,13 @@ public final class OptimiseCommand implements Callable<Integer> {
               long now = System.nanoTime();
               double rate = (report.evaluations() - lastEvaluations.getAndSet(
                   report.evaluations())) / Math.max(1e-9, (now - lastNanos.getAndSet(now)) / 1e9);
-              String line = progressLine(report, rate);
               if (progress != null) {
                 progress.stepTo(report.generation() + 1);
-                progress.setExtraMessage(line);
+                progress.setExtraMessage(String.format(Locale.ROOT, "%.0f eval/s, front %d,"
+                    + " HV %.3f", rate, report.feasibleArchiveSize(), report.hypervolume()));
               } else if (log) {
                 err.println("generation " + (report.generation()) + "/" + report.generations()
-                    + ": " + line);
+                    + ": " + progressLine(report, rate));
                 err.flush();
               }
             });
