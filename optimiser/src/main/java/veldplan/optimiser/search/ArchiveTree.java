@@ -20,7 +20,8 @@ import java.util.Arrays;
  * dominates. This is the pruning of the ND-Tree of Jaszkiewicz &amp; Lust (2018) [3], whose nodes
  * keep the local ideal and nadir points of their members. A removed member is only marked dead
  * (the boxes stay valid, if loose) until the next rebuild, which happens when the buffer is full
- * and keeps the live members only. The buffer holds up to about 4√size members and is scanned.
+ * and keeps the live members only. The buffer holds up to about 4√size members, sorted by
+ * f<sub>1</sub>; a query scans the part of it on the relevant side of p<sub>1</sub>.
  *
  * <p><b>Order.</b> Every member keeps the sequence number of its arrival; {@link #sorted} returns
  * the members sorted by f<sub>1</sub>, ties by arrival, so the order never depends on the tree's
@@ -60,7 +61,8 @@ final class ArchiveTree {
   private double[] boxMin = new double[0];
   private double[] boxMax = new double[0];
 
-  // The buffer of members added since the last rebuild, in no particular order.
+  // The buffer of members added since the last rebuild, sorted by f1 (ties in no particular
+  // order), so that an offer scans only the part with f1 <= p1, or >= p1.
   private int bufferSize;
   private double[] bufferObjectives;
   private Individual[] bufferMembers = new Individual[MIN_BUFFER];
@@ -92,7 +94,7 @@ final class ArchiveTree {
 
   /** Whether some member weakly dominates p (is &le; p in every objective). */
   boolean weaklyDominated(double[] p) {
-    for (int k = 0; k < bufferSize; k++) {
+    for (int k = 0; k < bufferSize && bufferObjectives[k * m] <= p[0]; k++) {
       if (leq(bufferObjectives, k * m, p)) {
         return true;
       }
@@ -158,19 +160,20 @@ final class ArchiveTree {
    * @return how many were removed
    */
   int removeWeaklyDominatedBy(double[] p) {
-    int removed = 0;
-    for (int k = 0; k < bufferSize; ) {
-      if (geq(bufferObjectives, k * m, p)) {
-        int last = --bufferSize;
-        System.arraycopy(bufferObjectives, last * m, bufferObjectives, k * m, m);
-        bufferMembers[k] = bufferMembers[last];
-        bufferArrival[k] = bufferArrival[last];
-        bufferMembers[last] = null;
-        removed++;
-      } else {
-        k++;
+    int kept = bufferFloor(p[0]); // buffer members with f1 < p1 cannot be dominated by p
+    for (int k = kept; k < bufferSize; k++) {
+      if (!geq(bufferObjectives, k * m, p)) {
+        if (kept != k) {
+          System.arraycopy(bufferObjectives, k * m, bufferObjectives, kept * m, m);
+          bufferMembers[kept] = bufferMembers[k];
+          bufferArrival[kept] = bufferArrival[k];
+        }
+        kept++;
       }
     }
+    int removed = bufferSize - kept;
+    Arrays.fill(bufferMembers, kept, bufferSize, null);
+    bufferSize = kept;
     removed += removeIn(p, 0, treeSize);
     size -= removed;
     if (removed > 0) {
@@ -211,15 +214,35 @@ final class ArchiveTree {
       bufferMembers = Arrays.copyOf(bufferMembers, capacity);
       bufferArrival = Arrays.copyOf(bufferArrival, capacity);
     }
-    System.arraycopy(member.objectives(), 0, bufferObjectives, bufferSize * m, m);
-    bufferMembers[bufferSize] = member;
-    bufferArrival[bufferSize] = arrivals++;
+    int at = bufferFloor(member.objectives()[0]);
+    System.arraycopy(bufferObjectives, at * m, bufferObjectives, (at + 1) * m,
+        (bufferSize - at) * m);
+    System.arraycopy(bufferMembers, at, bufferMembers, at + 1, bufferSize - at);
+    System.arraycopy(bufferArrival, at, bufferArrival, at + 1, bufferSize - at);
+    System.arraycopy(member.objectives(), 0, bufferObjectives, at * m, m);
+    bufferMembers[at] = member;
+    bufferArrival[at] = arrivals++;
     bufferSize++;
     size++;
     sorted = null;
     if (bufferSize > Math.max(MIN_BUFFER, BUFFER_FACTOR * (int) Math.sqrt(size))) {
       rebuild();
     }
+  }
+
+  /** The first buffer position whose f1 is &ge; x (the buffer is sorted by f1). */
+  private int bufferFloor(double x) {
+    int lo = 0;
+    int hi = bufferSize;
+    while (lo < hi) {
+      int mid = (lo + hi) >>> 1;
+      if (bufferObjectives[mid * m] < x) {
+        lo = mid + 1;
+      } else {
+        hi = mid;
+      }
+    }
+    return lo;
   }
 
   /** Builds the tree anew from the live members of the tree and the buffer; empties the buffer. */
