@@ -26,9 +26,11 @@ import java.util.List;
  * p<sub>1</sub> and one that p could dominate has f<sub>1</sub> &ge; p<sub>1</sub>, so each
  * member needs a one-way test that usually fails at its first objective. With two objectives the
  * members' f<sub>2</sub> strictly decrease, and an offer is a binary search plus the removal of
- * one contiguous run: O(log size) comparisons. With more objectives an offer is one pass over the
- * members, O(size × M) in the worst case. The order of members is a pure function of the
- * sequence of offers.
+ * one contiguous run: O(log size) comparisons. With three or more objectives the members are
+ * kept in an {@link ArchiveTree} instead (a k-d tree with bounding boxes plus a small buffer),
+ * which answers both questions of an offer without looking at most members; it returns them in
+ * the same order (by f<sub>1</sub>, ties by arrival). The order of members is a pure function of
+ * the sequence of offers.
  */
 public final class ParetoArchive {
   private final int m;
@@ -36,6 +38,8 @@ public final class ParetoArchive {
   private double[] objectives;
   private int size;
   private double violation;
+  /** The members when M &ge; 3 (then the arrays above stay empty); null when M &le; 2. */
+  private final ArchiveTree tree;
 
   /**
    * An empty archive.
@@ -47,7 +51,8 @@ public final class ParetoArchive {
       throw new IllegalArgumentException("objectives must be >= 1: " + objectives);
     }
     this.m = objectives;
-    this.objectives = new double[64 * objectives];
+    this.objectives = new double[objectives <= 2 ? 64 * objectives : 0];
+    this.tree = objectives <= 2 ? null : new ArchiveTree(objectives);
   }
 
   /**
@@ -63,14 +68,28 @@ public final class ParetoArchive {
           "individual with " + p.length + " objectives in an archive of " + m);
     }
     double v = candidate.evaluation().violation();
-    if (size > 0 && v != violation) {
+    if (size() > 0 && v != violation) {
       if (v > violation) {
         return false; // a member's violation is smaller
       }
-      size = 0; // the newcomer's violation is smaller than every member's: it dominates all
+      // the newcomer's violation is smaller than every member's: it dominates all
+      if (tree != null) {
+        tree.clear();
+      }
+      size = 0;
       Arrays.fill(members, null);
     }
     violation = v;
+    if (tree != null) {
+      if (v > 0 ? tree.containsEqual(p) : tree.weaklyDominated(p)) {
+        return false;
+      }
+      if (v == 0) {
+        tree.removeWeaklyDominatedBy(p);
+      }
+      tree.add(candidate);
+      return true;
+    }
     int lo = lowerBound(p[0]);
     int hi = upperBound(p[0], lo);
     if (v > 0) {
@@ -97,17 +116,18 @@ public final class ParetoArchive {
 
   /** Number of members. */
   public int size() {
-    return size;
+    return tree != null ? tree.size() : size;
   }
 
   /** Whether the members are feasible (false while empty). */
   public boolean feasible() {
-    return size > 0 && violation == 0;
+    return size() > 0 && violation == 0;
   }
 
   /** The members, sorted by the first objective (an unmodifiable snapshot). */
   public List<Individual> members() {
-    return Collections.unmodifiableList(Arrays.asList(Arrays.copyOf(members, size)));
+    Individual[] sorted = tree != null ? tree.sorted() : members;
+    return Collections.unmodifiableList(Arrays.asList(Arrays.copyOf(sorted, size())));
   }
 
   /**
@@ -118,9 +138,11 @@ public final class ParetoArchive {
     if (!feasible()) {
       return List.of();
     }
-    List<double[]> out = new ArrayList<>(size);
-    for (int k = 0; k < size; k++) {
-      out.add(members[k].objectives());
+    Individual[] sorted = tree != null ? tree.sorted() : members;
+    int count = size();
+    List<double[]> out = new ArrayList<>(count);
+    for (int k = 0; k < count; k++) {
+      out.add(sorted[k].objectives());
     }
     return out;
   }

@@ -97,4 +97,43 @@ class NonDominatedSortingTest {
       }
     }
   }
+
+  @Test
+  void fronts_twoAndThreeObjectives_sweepEqualsCounting() {
+    // The sweep used for M = 2, 3 (Zhang et al. 2015, ENS-BS with staircases) against Deb et
+    // al.'s counting procedure on the same input: identical fronts, element for element. Grids
+    // give ties in f1 (the pairwise part of the sweep), duplicates and -0.0 against 0.0; points
+    // near a sphere give large first fronts; some are infeasible, with repeated violations.
+    SplittableRandom random = new SplittableRandom(2015);
+    for (int trial = 0; trial < 400; trial++) {
+      int m = 2 + trial % 2;
+      int n = 1 + random.nextInt(trial % 5 == 0 ? 400 : 60);
+      double[] objectives = new double[n * m];
+      double[] violations = new double[n];
+      for (int i = 0; i < n; i++) {
+        double norm = 0;
+        for (int j = 0; j < m; j++) {
+          double f = trial % 3 == 0 ? random.nextInt(5) : random.nextDouble();
+          if (f == 0 && random.nextBoolean()) {
+            f = -0.0;
+          }
+          objectives[i * m + j] = f;
+          norm += f * f;
+        }
+        if (trial % 3 == 2 && norm > 0) {
+          double radius = (1 + 0.02 * random.nextDouble()) / Math.sqrt(norm);
+          for (int j = 0; j < m; j++) {
+            objectives[i * m + j] *= radius;
+          }
+        }
+        violations[i] = trial % 4 == 1 && random.nextInt(3) == 0 ? random.nextInt(3) * 0.25 : 0;
+      }
+      int[][] sweep = NonDominatedSorting.fronts(objectives, violations, n, m);
+      int[][] counting = NonDominatedSorting.fronts(objectives, violations, n, m, true);
+      assertEquals(counting.length, sweep.length, "trial " + trial);
+      for (int r = 0; r < counting.length; r++) {
+        assertArrayEquals(counting[r], sweep[r], "trial " + trial + " front " + r);
+      }
+    }
+  }
 }

@@ -232,6 +232,38 @@ class Nsga2Test {
   }
 
   @Test
+  void archive_equalsTheArchiveOfEverySolutionEvaluated() {
+    // Nsga2 offers only the children in the first front of P ∪ Q; anything else is dominated by
+    // something offered before, so the archive must be that of every evaluated solution, in the
+    // same order (3 objectives: the ArchiveTree path; a constraint: feasibility is reached late).
+    List<Individual> evaluated = new ArrayList<>();
+    SearchProblem dtlz2 = veldplan.optimiser.search.problems.Dtlz.dtlz2(3);
+    SearchProblem recorded = new SearchProblem() {
+      public int variables() { return dtlz2.variables(); }
+      public int objectives() { return 3; }
+      public double[] ideal() { return dtlz2.ideal(); }
+      public double[] nadir() { return dtlz2.nadir(); }
+      public List<Evaluation> evaluate(List<double[]> genes) {
+        List<Evaluation> out = new ArrayList<>();
+        for (Evaluation e : dtlz2.evaluate(genes)) {
+          double[] f = e.objectives(); // feasible iff f1 <= 0.2, violation on a coarse grid
+          out.add(new Evaluation(f, Math.ceil(Math.max(0, f[0] - 0.2) * 10) / 10));
+        }
+        for (int i = 0; i < genes.size(); i++) {
+          evaluated.add(new Individual(genes.get(i), out.get(i)));
+        }
+        return out;
+      }
+    };
+    SearchResult result = new Nsga2(Nsga2Settings.defaults(40, 60, 7), recorded)
+        .run(SearchListener.NONE);
+    ParetoArchive all = new ParetoArchive(3);
+    all.offerAll(evaluated);
+    assertTrue(all.feasible() && all.size() > 100, "size " + all.size());
+    assertEquals(all.members(), result.archive());
+  }
+
+  @Test
   void constraints_infeasibleRegionIsLeft() {
     // ZDT1 with the constraint f1 >= 0.5, violation max(0, 0.5 - f1): everything in the final
     // population and archive must be feasible (constrained domination, Deb et al. 2002).

@@ -22,13 +22,21 @@ import veldplan.optimiser.search.problems.Zdt;
  *
  * <p><b>DTLZ2.</b> A 100-point population cannot come within 1.5 % of the front's 0.8074012 (91
  * ideally placed points give 0.7448509, §3.6), so the external archive of every non-dominated
- * individual found is measured there. Measured when this test was written (seeds 1–5): archive
- * median 0.7916, 1.96 % below the front; population median 0.704. The target of 1.5 % is
- * <em>not</em> met with these textbook settings. Two measured reasons: the archive's ~6,000 points,
- * projected radially onto the front, already lose 1.1 % (the gaps of a finite sample of a 2-D
- * surface shrink only as 1/sqrt(N)); and the archive's median distance from the front,
- * ‖f‖ − 1, is still 0.005 after 25,000 evaluations. The DTLZ2 bound below is therefore 2.5 %
- * (Rationale: the measured median plus a margin for other seeds), and the gap is reported.
+ * individual found is measured there. The target of 1.5 % is <em>not</em> met: the archive's
+ * median is 0.7916 (seeds 1–5 and 1–11 alike), 1.96 % below the front. This is the level of
+ * textbook NSGA-II at this budget, not a defect of this implementation: the same archive formed
+ * from every solution that jMetal 6.6's and MOEA Framework 5.0's NSGA-II evaluate, same settings
+ * and budget, has a median of 0.7902 and 0.7912 over seeds 1–11 (2.13 % and 2.01 % short;
+ * {@code CompareNsga2}, README "Multi-objective search engine against jMetal and MOEA
+ * Framework", 2026-12-02). Checked on the way: the operators follow the reference code
+ * (per-variable crossover probability 0.5, bounded SBX and PM, random swap of the children,
+ * p<sub>m</sub> = 1/n); the archive equals the non-dominated set of all 25,000 evaluated vectors (offering all of
+ * them gives the same members); its hypervolume agrees with an independent slicing computation
+ * to 7 digits and with Monte Carlo (4 million samples) within 2 standard errors. Where the 2 %
+ * goes: the archive's ~6,000 points, projected radially onto the front, already lose 1.1 % (the
+ * gaps of a finite sample of a 2-D surface shrink only as 1/sqrt(N)); and their median distance
+ * from the front, ‖f‖ − 1, is still 0.005. The DTLZ2 archive bound below is therefore that of the
+ * better of the two other libraries: a median of at least 0.7912, i.e. at most 2.01 % short.
  */
 class Nsga2ValidationTest {
   private static final int SEEDS = 5;
@@ -41,10 +49,13 @@ class Nsga2ValidationTest {
     /** decision-methods §3.5 / §9: ZDT3 front HV with r = (1.1, 1.1) is 1.3317629. */
     ZDT3(Zdt.ZDT3, 1.3317629, 0.015, 0.015),
     /**
-     * decision-methods §3.6 / §9: DTLZ2 (M = 3) front HV with r = 1.1 is 0.8074012. Population:
-     * no closer than 91 ideal points (0.7448509, i.e. 7.75 % below) can be asked for; 15 %.
+     * decision-methods §3.6 / §9: DTLZ2 (M = 3) front HV with r = 1.1 is 0.8074012. Archive: no
+     * worse than MOEA Framework 5.0's NSGA-II, whose non-dominated evaluated solutions reach a
+     * median of 0.7912 = (1 − 0.0201) × 0.8074012 (CompareNsga2, seeds 1–11; see the class
+     * comment). Population: no closer than 91 ideal points (0.7448509, i.e. 7.75 % below) can be
+     * asked for; 15 %.
      */
-    DTLZ2(Dtlz.dtlz2(3), 0.8074012, 0.025, 0.15);
+    DTLZ2(Dtlz.dtlz2(3), 0.8074012, 0.0201, 0.15);
 
     final SearchProblem problem;
     final double frontHypervolume;

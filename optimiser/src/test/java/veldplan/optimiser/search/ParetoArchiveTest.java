@@ -112,4 +112,91 @@ class ParetoArchiveTest {
     c.offerAll(a.members()); // a checkpoint's archive restores to the same order
     assertEquals(a.members(), c.members());
   }
+
+  /**
+   * The archive defined by its documented rule alone, kept as a plain list: a newcomer is rejected
+   * if a member constrained-dominates it or has the same objective vector and violation;
+   * otherwise the members it dominates go and it is appended. Members are listed by f1, ties in
+   * order of arrival. "The same vector" is == in every objective among feasible members (a
+   * member weakly dominating the newcomer rejects it, so -0.0 and 0.0 are the same) and bit for
+   * bit among infeasible ones (which are compared only for duplicates).
+   */
+  private static List<Individual> referenceArchive(List<Individual> offers) {
+    List<Individual> list = new ArrayList<>();
+    for (Individual c : offers) {
+      boolean rejected = false;
+      for (Individual a : list) {
+        rejected |= Dominance.constrained(a.evaluation(), c.evaluation()) < 0
+            || sameVector(a.evaluation(), c.evaluation());
+      }
+      if (!rejected) {
+        list.removeIf(a -> Dominance.constrained(c.evaluation(), a.evaluation()) < 0);
+        list.add(c);
+      }
+    }
+    List<Individual> sorted = new ArrayList<>(list); // stable: ties keep arrival order
+    sorted.sort((a, b) -> a.objectives()[0] < b.objectives()[0] ? -1
+        : a.objectives()[0] > b.objectives()[0] ? 1 : 0);
+    return sorted;
+  }
+
+  private static boolean sameVector(Evaluation a, Evaluation b) {
+    if (a.violation() != b.violation()) {
+      return false;
+    }
+    if (a.violation() > 0) {
+      return a.equals(b);
+    }
+    for (int j = 0; j < a.objectives().length; j++) {
+      if (a.objectives()[j] != b.objectives()[j]) {
+        return false;
+      }
+    }
+    return true;
+  }
+
+  @ParameterizedTest
+  @ValueSource(ints = {2, 3, 4, 5})
+  void offer_longSequences_sameMembersInTheSameOrderAsTheRule(int m) {
+    // Long enough for the M >= 3 index to be rebuilt many times (ArchiveTree); points near a
+    // sphere (thousands of mutually non-dominated ones), on a coarse grid (ties, duplicates,
+    // -0.0 against 0.0) and infeasible ones with equal violations.
+    SplittableRandom random = new SplittableRandom(1000 + m);
+    for (int trial = 0; trial < 12; trial++) {
+      List<Individual> offers = new ArrayList<>();
+      int n = 500 + random.nextInt(3000);
+      for (int i = 0; i < n; i++) {
+        double[] f = new double[m];
+        double norm = 0;
+        for (int j = 0; j < m; j++) {
+          f[j] = trial % 3 == 0 ? random.nextInt(6) : Math.abs(random.nextGaussian());
+          norm += f[j] * f[j];
+        }
+        if (trial % 3 == 1) {
+          double radius = (1 + 0.05 * random.nextDouble()) / Math.sqrt(norm);
+          for (int j = 0; j < m; j++) {
+            f[j] *= radius;
+          }
+        }
+        if (trial % 3 == 0 && f[0] == 0 && random.nextBoolean()) {
+          f[0] = -0.0;
+        }
+        double violation = trial % 4 == 3 && i < n / 2 ? 0.5 * (1 + random.nextInt(2)) : 0;
+        offers.add(new Individual(new double[] {i}, new Evaluation(f, violation)));
+      }
+      ParetoArchive archive = new ParetoArchive(m);
+      for (int i = 0; i < n; i++) {
+        archive.offer(offers.get(i));
+        if (i == n / 3) { // reading the members in between changes nothing
+          assertEquals(referenceArchive(offers.subList(0, i + 1)), archive.members());
+        }
+      }
+      List<Individual> expected = referenceArchive(offers);
+      assertEquals(expected, archive.members(), "m=" + m + " trial " + trial);
+      assertEquals(expected.size(), archive.size());
+      ParetoArchive restored = new ParetoArchive(m); // as from a checkpoint
+      restored.offerAll(archive.members());
+      assertEquals(expected, restored.members());
+    }
+  }
 }

@@ -17,10 +17,13 @@ import org.uma.jmetal.operator.mutation.impl.PolynomialMutation;
 import org.uma.jmetal.problem.doubleproblem.DoubleProblem;
 import org.uma.jmetal.solution.doublesolution.DoubleSolution;
 import org.uma.jmetal.util.pseudorandom.JMetalRandom;
+import org.uma.jmetal.util.bounds.Bounds;
+import veldplan.optimiser.search.Evaluation;
 import veldplan.optimiser.search.Hypervolume;
 import veldplan.optimiser.search.Individual;
 import veldplan.optimiser.search.Nsga2;
 import veldplan.optimiser.search.Nsga2Settings;
+import veldplan.optimiser.search.ParetoArchive;
 import veldplan.optimiser.search.SearchListener;
 import veldplan.optimiser.search.SearchProblem;
 import veldplan.optimiser.search.SearchResult;
@@ -35,8 +38,11 @@ import veldplan.optimiser.search.problems.Zdt;
  * 2002). Prints, per problem and library, the median over seeds of the final population's
  * hypervolume (r = 1.1 in every objective; ideal 0 and nadir 1 for all three problems, so this is
  * the raw hypervolume) and of the wall time per run, after one warm-up run of every
- * configuration. For veldplan it also prints the hypervolume of the external archive, which the
- * other two do not keep. Runs are interleaved (seed by seed, library by library) so that load
+ * configuration. It also prints the hypervolume of the archive of every non-dominated solution
+ * found: veldplan's external archive (its upkeep is inside the timed run), and for the other two,
+ * which keep no such archive, the non-dominated set of every objective vector their problem was
+ * asked to evaluate, recorded during the run and formed afterwards, outside the timing. Runs are
+ * interleaved (seed by seed, library by library) so that load
  * from other processes on the machine falls on all three alike.
  *
  * <pre>{@code
@@ -55,12 +61,18 @@ public final class CompareNsga2 {
 
   private CompareNsga2() {}
 
-  /** One configuration: runs with a seed, returns {population HV, archive HV or NaN}. */
+  /**
+   * One configuration: runs with a seed. The result holds the final population's HV and either
+   * the HV of the library's own archive (veldplan) or every objective vector the library
+   * evaluated (the others), whose non-dominated set is formed after the run, outside the timing.
+   */
   private interface Runner {
-    double[] run(long seed);
+    Outcome run(long seed);
   }
 
-  private record Case(String problem, String library, Runner runner) {}
+  private record Outcome(double populationHv, double archiveHv, List<double[]> evaluated) {}
+
+  private record Case(String problem, String library, double[] reference, Runner runner) {}
 
   public static void main(String[] args) {
     int seeds = args.length > 0 ? Integer.parseInt(args[0]) : 5;
@@ -88,10 +100,11 @@ public final class CompareNsga2 {
     for (int s = 0; s < seeds; s++) {
       for (int k = 0; k < size; k++) {
         long start = System.nanoTime();
-        double[] r = cases.get(k).runner.run(s + 1);
+        Outcome r = cases.get(k).runner.run(s + 1);
         seconds[k][s] = (System.nanoTime() - start) / 1e9;
-        hv[k][s] = r[0];
-        archiveHv[k][s] = r[1];
+        hv[k][s] = r.populationHv();
+        archiveHv[k][s] = r.evaluated() == null ? r.archiveHv()
+            : nonDominatedHypervolume(r.evaluated(), cases.get(k).reference());
       }
     }
     System.out.println();
@@ -100,8 +113,7 @@ public final class CompareNsga2 {
     System.out.println("|---|---|---|---|---|");
     for (int k = 0; k < size; k++) {
       Case c = cases.get(k);
-      String archive = Double.isNaN(archiveHv[k][0]) ? "–"
-          : String.format(Locale.ROOT, "%.4f", median(archiveHv[k]));
+      String archive = String.format(Locale.ROOT, "%.4f", median(archiveHv[k]));
       System.out.printf(Locale.ROOT, "| %s | %s | %.4f (%.4f–%.4f) | %s | %.3f s (%.3f–%.3f) |%n",
           c.problem, c.library, median(hv[k]), min(hv[k]), max(hv[k]), archive,
           median(seconds[k]), min(seconds[k]), max(seconds[k]));
@@ -114,16 +126,17 @@ public final class CompareNsga2 {
     int n = ours.variables();
     double[] reference = new double[ours.objectives()];
     Arrays.fill(reference, Hypervolume.NORMALISED_REFERENCE);
-    cases.add(new Case(name, "veldplan Nsga2", seed -> {
+    cases.add(new Case(name, "veldplan Nsga2", reference, seed -> {
       SearchResult r = new Nsga2(
           new Nsga2Settings(POPULATION, GENERATIONS, PC, ETA_C, 1.0 / n, ETA_M, seed), ours)
           .run(SearchListener.NONE);
-      return new double[] {Hypervolume.of(objectives(r.population()), reference),
-          Hypervolume.of(objectives(r.archive()), reference)};
+      return new Outcome(Hypervolume.of(objectives(r.population()), reference),
+          Hypervolume.of(objectives(r.archive()), reference), null);
     }));
-    cases.add(new Case(name, "jMetal 6.6 NSGAII", seed -> {
+    cases.add(new Case(name, "jMetal 6.6 NSGAII", reference, seed -> {
       JMetalRandom.getInstance().setSeed(seed);
-      DoubleProblem problem = jmetal.apply(n);
+      List<double[]> evaluated = new ArrayList<>(EVALUATIONS);
+      DoubleProblem problem = recording(jmetal.apply(n), evaluated);
       NSGAII<DoubleSolution> algorithm = new NSGAIIBuilder<>(problem,
           new SBXCrossover(PC, ETA_C), new PolynomialMutation(1.0 / n, ETA_M), POPULATION)
           .setMaxEvaluations(EVALUATIONS)
@@ -133,12 +146,13 @@ public final class CompareNsga2 {
       for (DoubleSolution s : algorithm.result()) {
         points.add(s.objectives().clone());
       }
-      return new double[] {Hypervolume.of(points, reference), Double.NaN};
+      return new Outcome(Hypervolume.of(points, reference), Double.NaN, evaluated);
     }));
-    cases.add(new Case(name, "MOEA Framework 5.0 NSGAII", seed -> {
+    cases.add(new Case(name, "MOEA Framework 5.0 NSGAII", reference, seed -> {
       PRNG.setSeed(seed);
+      List<double[]> evaluated = new ArrayList<>(EVALUATIONS);
       org.moeaframework.algorithm.NSGAII algorithm =
-          new org.moeaframework.algorithm.NSGAII(moea.apply(n));
+          new org.moeaframework.algorithm.NSGAII(recording(moea.apply(n), evaluated));
       algorithm.setInitialPopulationSize(POPULATION);
       algorithm.setVariation(new CompoundVariation(new SBX(PC, ETA_C), new PM(1.0 / n, ETA_M)));
       algorithm.run(EVALUATIONS);
@@ -146,8 +160,101 @@ public final class CompareNsga2 {
       for (Solution s : algorithm.getPopulation()) {
         points.add(s.getObjectiveValues());
       }
-      return new double[] {Hypervolume.of(points, reference), Double.NaN};
+      return new Outcome(Hypervolume.of(points, reference), Double.NaN, evaluated);
     }));
+  }
+
+  /** Hypervolume of the non-dominated vectors among {@code points}, formed by our archive. */
+  private static double nonDominatedHypervolume(List<double[]> points, double[] reference) {
+    ParetoArchive archive = new ParetoArchive(reference.length);
+    for (double[] p : points) {
+      archive.offer(new Individual(new double[0], Evaluation.of(p)));
+    }
+    return Hypervolume.of(archive.feasibleObjectives(), reference);
+  }
+
+  /** jMetal's problem, also copying every objective vector it evaluates into {@code sink}. */
+  private static DoubleProblem recording(DoubleProblem problem, List<double[]> sink) {
+    return new DoubleProblem() {
+      @Override
+      public DoubleSolution evaluate(DoubleSolution solution) {
+        problem.evaluate(solution);
+        sink.add(solution.objectives().clone());
+        return solution;
+      }
+
+      @Override
+      public DoubleSolution createSolution() {
+        return problem.createSolution();
+      }
+
+      @Override
+      public int numberOfVariables() {
+        return problem.numberOfVariables();
+      }
+
+      @Override
+      public int numberOfObjectives() {
+        return problem.numberOfObjectives();
+      }
+
+      @Override
+      public int numberOfConstraints() {
+        return problem.numberOfConstraints();
+      }
+
+      @Override
+      public String name() {
+        return problem.name();
+      }
+
+      @Override
+      public List<Bounds<Double>> variableBounds() {
+        return problem.variableBounds();
+      }
+    };
+  }
+
+  /** MOEA Framework's problem, also copying every objective vector it evaluates into sink. */
+  private static org.moeaframework.problem.Problem recording(
+      org.moeaframework.problem.Problem problem, List<double[]> sink) {
+    return new org.moeaframework.problem.Problem() {
+      @Override
+      public void evaluate(Solution solution) {
+        problem.evaluate(solution);
+        sink.add(solution.getObjectiveValues().clone());
+      }
+
+      @Override
+      public Solution newSolution() {
+        return problem.newSolution();
+      }
+
+      @Override
+      public String getName() {
+        return problem.getName();
+      }
+
+      @Override
+      public int getNumberOfVariables() {
+        return problem.getNumberOfVariables();
+      }
+
+      @Override
+      public int getNumberOfObjectives() {
+        return problem.getNumberOfObjectives();
+      }
+
+      @Override
+      public int getNumberOfConstraints() {
+        return problem.getNumberOfConstraints();
+      }
+
+      @Override
+      public void close() {
+        problem.close();
+      }
+    };
   }
 
   private static List<double[]> objectives(List<Individual> individuals) {
