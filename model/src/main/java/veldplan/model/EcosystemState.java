@@ -75,10 +75,6 @@ public final class EcosystemState {
   final double[][] resourceShare;
   /** Reach x acceptance, same indexing, kept by Herbivory.updateReach. */
   final double[][] usableWeight;
-  /** Scratch: share x depletion [pool][(h * blocks + block) * 2 + kind]. */
-  final double[][] pressureTerm;
-  /** Scratch: share of its forage h gets in each category, same indexing. */
-  final double[][] demandMet;
   /** This year's demand on forage shared with others, head x intake / coarse factor (kg). */
   final double[] sharedDemandKg;
   /**
@@ -148,8 +144,6 @@ public final class EcosystemState {
     int pooled = herbivores * blocks * Herbivory.KINDS_PER_POOL;
     resourceShare = new double[Herbivory.POOLS][pooled];
     usableWeight = new double[Herbivory.POOLS][pooled];
-    pressureTerm = new double[Herbivory.POOLS][pooled];
-    demandMet = new double[Herbivory.POOLS][pooled];
     overlap = new double[herbivores * Herbivory.POOLS][pooled];
     depletion = new double[Herbivory.POOLS][pooled];
     setRunConstants(p);

@@ -290,72 +290,56 @@ final class Herbivory {
     }
     // Per category: the share of h's forage times the depletion there, and the share of its
     // demand met there: all of it unless the category is over-used (depletion above 1), where
-    // it gets share / depletion. Loops over rows indexed alike, which the JIT vectorises.
-    for (int pool = 0; pool < POOLS; pool++) {
-      double[] depletion = s.depletion[pool];
-      double[] shares = s.resourceShare[pool];
-      double[] pressure = s.pressureTerm[pool];
-      double[] got = s.demandMet[pool];
-      for (int j = 0; j < span; j++) {
-        double d = depletion[j];
-        pressure[j] = shares[j] * d;
-        got[j] = shares[j] / Math.max(1, d);
-      }
-    }
+    // it gets share / depletion. One pass over each herbivore's row, summed category by
+    // category (tall, short, low, high of each block). A category h does not use (share 0)
+    // adds exactly 0 to every sum (the depletion is finite), so no test is needed; and where
+    // the depletion is at most 1, share / max(1, d) is share itself, so the division is done
+    // only where d > 1 (both give the same bits). High browse is not in the browsed share.
     double[] grassShares = s.resourceShare[0];
     double[] browseShares = s.resourceShare[1];
-    double[] grassPressure = s.pressureTerm[0];
-    double[] browsePressure = s.pressureTerm[1];
-    double[] grassGot = s.demandMet[0];
-    double[] browseGot = s.demandMet[1];
+    double[] grassDepletion = s.depletion[0];
+    double[] browseDepletion = s.depletion[1];
     double[] grazedKg = s.grazedFraction;
     double[] browsedKg = s.browsePressure;
     double[] elephantUse = s.elephantsPerKm2;
     for (int b = 0; b < blocks; b++) {
       grazedKg[b] = 0;
       browsedKg[b] = 0;
-      elephantUse[b] = 0;
     }
-    // Summed category by category (tall, short, low, high of each block); a category h does not
-    // use (share 0) adds nothing.
     for (int h = 0; h < herbivores; h++) {
       double demand = sharedDemand[h];
       double pressure = 0;
       for (int b = 0; b < blocks; b++) {
         int j = (h * blocks + b) * KINDS_PER_POOL;
-        double grazed = grazedKg[b];
-        double browsed = browsedKg[b];
-        double used = 0;
         double tall = grassShares[j];
-        if (tall != 0) {
-          pressure += grassPressure[j];
-          grazed += demand * grassGot[j];
-          used += tall;
-        }
         double short_ = grassShares[j + 1];
-        if (short_ != 0) {
-          pressure += grassPressure[j + 1];
-          grazed += demand * grassGot[j + 1];
-          used += short_;
-        }
         double low = browseShares[j];
-        if (low != 0) {
-          pressure += browsePressure[j];
-          browsed += demand * browseGot[j];
-          used += low;
-        }
         double high = browseShares[j + 1];
-        if (high != 0) {
-          pressure += browsePressure[j + 1];
-          used += high;
-        }
+        double dTall = grassDepletion[j];
+        double dShort = grassDepletion[j + 1];
+        double dLow = browseDepletion[j];
+        double dHigh = browseDepletion[j + 1];
+        pressure += tall * dTall;
+        pressure += short_ * dShort;
+        pressure += low * dLow;
+        pressure += high * dHigh;
+        double grazed = grazedKg[b];
+        grazed += demand * (dTall > 1 ? tall / dTall : tall);
+        grazed += demand * (dShort > 1 ? short_ / dShort : short_);
         grazedKg[b] = grazed;
-        browsedKg[b] = browsed;
-        if (h == e) {
-          elephantUse[b] = used;
-        }
+        browsedKg[b] += demand * (dLow > 1 ? low / dLow : low);
       }
       s.pressureKg[h] = pressure * s.forageKg[h];
+    }
+    // The share of each block the elephants use: the sum of their shares there.
+    for (int b = 0; b < blocks; b++) {
+      int j = (e * blocks + b) * KINDS_PER_POOL;
+      double used = 0;
+      used += grassShares[j];
+      used += grassShares[j + 1];
+      used += browseShares[j];
+      used += browseShares[j + 1];
+      elephantUse[b] = used;
     }
     for (int b = 0; b < blocks; b++) {
       // Eaten kg/ha for now; eat() turns both into shares of what there was.
