@@ -77,6 +77,8 @@ public final class EcosystemState {
   final double[][] usableWeight;
   /** This year's demand on forage shared with others, head x intake / coarse factor (kg). */
   final double[] sharedDemandKg;
+  /** o's demand per unit of usable supply in each pool [o * POOLS + pool] (Herbivory.compete). */
+  final double[] demandPerUnitSupply;
   /**
    * Overlap weights [o * POOLS + pool][(h * blocks + block) * 2 + kind], kept by
    * Herbivory.updateReach (see {@link Herbivory}).
@@ -136,6 +138,7 @@ public final class EcosystemState {
     preyKg = new double[herbivores];
     tallShare = new double[blocks];
     sharedDemandKg = new double[herbivores];
+    demandPerUnitSupply = new double[herbivores * Herbivory.POOLS];
     checked = new double[][] {treesPerHa, leftoverGrassKgPerHa, abundance, predatorAbundance,
         fuelKgPerHa, grassProductionKgPerHa, plannedBurntFraction, wildBurntFraction, reach,
         plannedIntensityKwPerM, wildIntensityKwPerM, basalAreaM2PerHa, lowBrowseKgPerHa,
