@@ -221,30 +221,46 @@ final class Herbivory {
     double[] browseShares = s.resourceShare[1];
     double[] grassWeight = s.usableWeight[0];
     double[] browseWeight = s.usableWeight[1];
+    // Block by block, herbivore by herbivore within the block: each herbivore's forage is still
+    // summed in the order tall, short, low, high of block 0, then of block 1, ... (the same
+    // bits), but the sums of different herbivores are independent and overlap in the CPU
+    // instead of waiting on each other's additions.
+    double[] forage = s.forageKg;
     for (int h = 0; h < herbivores; h++) {
-      double grassShare = s.grassDiet[h];
-      double browseShare = 1 - grassShare;
-      double forage = 0;
-      int row = h * blocks * KINDS_PER_POOL;
-      for (int b = 0; b < blocks; b++) {
-        int j = row + b * KINDS_PER_POOL;
-        int at = CATEGORIES_PER_BLOCK * b;
-        double tall = grassWeight[j] * grassShare * supply[at + TALL];
-        double short_ = grassWeight[j + 1] * grassShare * supply[at + SHORT];
-        double low = browseWeight[j] * browseShare * supply[at + LOW_BROWSE];
-        double high = browseWeight[j + 1] * browseShare * supply[at + HIGH_BROWSE];
+      forage[h] = 0;
+    }
+    double[] diet = s.grassDiet;
+    for (int b = 0; b < blocks; b++) {
+      int at = CATEGORIES_PER_BLOCK * b;
+      double tallSupply = supply[at + TALL];
+      double shortSupply = supply[at + SHORT];
+      double lowSupply = supply[at + LOW_BROWSE];
+      double highSupply = supply[at + HIGH_BROWSE];
+      for (int h = 0; h < herbivores; h++) {
+        double grassShare = diet[h];
+        double browseShare = 1 - grassShare;
+        int j = (h * blocks + b) * KINDS_PER_POOL;
+        double tall = grassWeight[j] * grassShare * tallSupply;
+        double short_ = grassWeight[j + 1] * grassShare * shortSupply;
+        double low = browseWeight[j] * browseShare * lowSupply;
+        double high = browseWeight[j + 1] * browseShare * highSupply;
         grassShares[j] = tall;
         grassShares[j + 1] = short_;
         browseShares[j] = low;
         browseShares[j + 1] = high;
-        forage += tall;
-        forage += short_;
-        forage += low;
-        forage += high;
+        double sum = forage[h];
+        sum += tall;
+        sum += short_;
+        sum += low;
+        sum += high;
+        forage[h] = sum;
       }
-      s.forageKg[h] = forage;
-      if (forage > 0) {
-        double inverse = 1 / forage;
+    }
+    for (int h = 0; h < herbivores; h++) {
+      double total = forage[h];
+      if (total > 0) {
+        double inverse = 1 / total;
+        int row = h * blocks * KINDS_PER_POOL;
         for (int j = row; j < row + blocks * KINDS_PER_POOL; j++) {
           grassShares[j] *= inverse;
           browseShares[j] *= inverse;
