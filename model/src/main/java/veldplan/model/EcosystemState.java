@@ -71,8 +71,13 @@ public final class EcosystemState {
   // ---- scratch
   /** Tall-grass share of this year's production [block]. */
   final double[] tallShare;
-  /** Resource shares p_hk [pool][(herbivore * blocks + block) * 2 + kind of the pool]. */
-  final double[][] resourceShare;
+  /**
+   * Usable forage of each herbivore in each category (kg DM) [pool][(herbivore * blocks + block)
+   * * 2 + kind of the pool]; times {@link #inverseForage} it is the resource share p_hk.
+   */
+  final double[][] categoryForageKg;
+  /** 1 / forageKg, or 1 where the forage is 0 [herbivore] (Herbivory.usableForage). */
+  final double[] inverseForage;
   /** Reach x acceptance, same indexing, kept by Herbivory.updateReach. */
   final double[][] usableWeight;
   /** This year's demand on forage shared with others, head x intake / coarse factor (kg). */
@@ -145,7 +150,8 @@ public final class EcosystemState {
         highBrowseKgPerHa, browsePressure, elephantsPerKm2, grazedFraction, tallShare,
         grassDiet, forageKg, pressureKg, predationHazard, preyBiomassKg, coverageHistory};
     int pooled = herbivores * blocks * Herbivory.KINDS_PER_POOL;
-    resourceShare = new double[Herbivory.POOLS][pooled];
+    categoryForageKg = new double[Herbivory.POOLS][pooled];
+    inverseForage = new double[herbivores];
     usableWeight = new double[Herbivory.POOLS][pooled];
     overlap = new double[herbivores * Herbivory.POOLS][pooled];
     depletion = new double[Herbivory.POOLS][pooled];

@@ -214,11 +214,11 @@ final class Herbivory {
       supply[at + HIGH_BROWSE] = bp.areaHa[b] * browseUse * s.highBrowseKgPerHa[b];
     }
 
-    // What each herbivore can use: supply within its reach that it accepts, split by its diet;
-    // and its shares p_hk of that total. Kept per pool, [pool][(h * blocks + b) * 2 + kind].
+    // What each herbivore can use: supply within its reach that it accepts, split by its diet,
+    // and its total. Kept per pool, [pool][(h * blocks + b) * 2 + kind].
     // (reach x acceptance is kept by updateReach: the same product, in the same order.)
-    double[] grassShares = s.resourceShare[0];
-    double[] browseShares = s.resourceShare[1];
+    double[] grassForage = s.categoryForageKg[0];
+    double[] browseForage = s.categoryForageKg[1];
     double[] grassWeight = s.usableWeight[0];
     double[] browseWeight = s.usableWeight[1];
     // Block by block, herbivore by herbivore within the block: each herbivore's forage is still
@@ -244,10 +244,10 @@ final class Herbivory {
         double short_ = grassWeight[j + 1] * grassShare * shortSupply;
         double low = browseWeight[j] * browseShare * lowSupply;
         double high = browseWeight[j + 1] * browseShare * highSupply;
-        grassShares[j] = tall;
-        grassShares[j + 1] = short_;
-        browseShares[j] = low;
-        browseShares[j + 1] = high;
+        grassForage[j] = tall;
+        grassForage[j + 1] = short_;
+        browseForage[j] = low;
+        browseForage[j + 1] = high;
         double sum = forage[h];
         sum += tall;
         sum += short_;
@@ -256,16 +256,12 @@ final class Herbivory {
         forage[h] = sum;
       }
     }
+    // The shares p_hk are these amounts times 1 / forage_h, taken where they are used
+    // (compete): the same product as normalising them here, without a pass over the rows.
+    double[] inverseForage = s.inverseForage;
     for (int h = 0; h < herbivores; h++) {
       double total = forage[h];
-      if (total > 0) {
-        double inverse = 1 / total;
-        int row = h * blocks * KINDS_PER_POOL;
-        for (int j = row; j < row + blocks * KINDS_PER_POOL; j++) {
-          grassShares[j] *= inverse;
-          browseShares[j] *= inverse;
-        }
-      }
+      inverseForage[h] = total > 0 ? 1 / total : 1;
     }
   }
 
@@ -316,8 +312,9 @@ final class Herbivory {
     // adds exactly 0 to every sum (the depletion is finite), so no test is needed; and where
     // the depletion is at most 1, share / max(1, d) is share itself, so the division is done
     // only where d > 1 (both give the same bits). High browse is not in the browsed share.
-    double[] grassShares = s.resourceShare[0];
-    double[] browseShares = s.resourceShare[1];
+    double[] grassForage = s.categoryForageKg[0];
+    double[] browseForage = s.categoryForageKg[1];
+    double[] inverseForage = s.inverseForage;
     double[] grassDepletion = s.depletion[0];
     double[] browseDepletion = s.depletion[1];
     double[] grazedKg = s.grazedFraction;
@@ -329,13 +326,14 @@ final class Herbivory {
     }
     for (int h = 0; h < herbivores; h++) {
       double demand = sharedDemand[h];
+      double inverse = inverseForage[h];
       double pressure = 0;
       for (int b = 0; b < blocks; b++) {
         int j = (h * blocks + b) * KINDS_PER_POOL;
-        double tall = grassShares[j];
-        double short_ = grassShares[j + 1];
-        double low = browseShares[j];
-        double high = browseShares[j + 1];
+        double tall = grassForage[j] * inverse;
+        double short_ = grassForage[j + 1] * inverse;
+        double low = browseForage[j] * inverse;
+        double high = browseForage[j + 1] * inverse;
         double dTall = grassDepletion[j];
         double dShort = grassDepletion[j + 1];
         double dLow = browseDepletion[j];
@@ -355,11 +353,12 @@ final class Herbivory {
     // The share of each block the elephants use: the sum of their shares there.
     for (int b = 0; b < blocks; b++) {
       int j = (e * blocks + b) * KINDS_PER_POOL;
+      double inverse = inverseForage[e];
       double used = 0;
-      used += grassShares[j];
-      used += grassShares[j + 1];
-      used += browseShares[j];
-      used += browseShares[j + 1];
+      used += grassForage[j] * inverse;
+      used += grassForage[j + 1] * inverse;
+      used += browseForage[j] * inverse;
+      used += browseForage[j + 1] * inverse;
       elephantUse[b] = used;
     }
     for (int b = 0; b < blocks; b++) {
