@@ -71,16 +71,19 @@ public final class EcosystemState {
   // ---- scratch
   /** Tall-grass share of this year's production [block]. */
   final double[] tallShare;
-  /** Resource shares p_hk [pool][(herbivore * blocks + block) * 2 + kind of the pool]. */
-  final double[][] resourceShare;
+  /**
+   * Usable forage of each herbivore in each category (kg DM) [pool][(herbivore * blocks + block)
+   * * 2 + kind of the pool]; times {@link #inverseForage} it is the resource share p_hk.
+   */
+  final double[][] categoryForageKg;
+  /** 1 / forageKg, or 1 where the forage is 0 [herbivore] (Herbivory.usableForage). */
+  final double[] inverseForage;
   /** Reach x acceptance, same indexing, kept by Herbivory.updateReach. */
   final double[][] usableWeight;
-  /** Scratch: share x depletion [pool][(h * blocks + block) * 2 + kind]. */
-  final double[][] pressureTerm;
-  /** Scratch: share of its forage h gets in each category, same indexing. */
-  final double[][] demandMet;
   /** This year's demand on forage shared with others, head x intake / coarse factor (kg). */
   final double[] sharedDemandKg;
+  /** o's demand per unit of usable supply in each pool [o * POOLS + pool] (Herbivory.compete). */
+  final double[] demandPerUnitSupply;
   /**
    * Overlap weights [o * POOLS + pool][(h * blocks + block) * 2 + kind], kept by
    * Herbivory.updateReach (see {@link Herbivory}).
@@ -140,16 +143,16 @@ public final class EcosystemState {
     preyKg = new double[herbivores];
     tallShare = new double[blocks];
     sharedDemandKg = new double[herbivores];
+    demandPerUnitSupply = new double[herbivores * Herbivory.POOLS];
     checked = new double[][] {treesPerHa, leftoverGrassKgPerHa, abundance, predatorAbundance,
         fuelKgPerHa, grassProductionKgPerHa, plannedBurntFraction, wildBurntFraction, reach,
         plannedIntensityKwPerM, wildIntensityKwPerM, basalAreaM2PerHa, lowBrowseKgPerHa,
         highBrowseKgPerHa, browsePressure, elephantsPerKm2, grazedFraction, tallShare,
         grassDiet, forageKg, pressureKg, predationHazard, preyBiomassKg, coverageHistory};
     int pooled = herbivores * blocks * Herbivory.KINDS_PER_POOL;
-    resourceShare = new double[Herbivory.POOLS][pooled];
+    categoryForageKg = new double[Herbivory.POOLS][pooled];
+    inverseForage = new double[herbivores];
     usableWeight = new double[Herbivory.POOLS][pooled];
-    pressureTerm = new double[Herbivory.POOLS][pooled];
-    demandMet = new double[Herbivory.POOLS][pooled];
     overlap = new double[herbivores * Herbivory.POOLS][pooled];
     depletion = new double[Herbivory.POOLS][pooled];
     setRunConstants(p);

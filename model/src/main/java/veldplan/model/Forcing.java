@@ -1,5 +1,7 @@
 package veldplan.model;
 
+import veldplan.model.ecology.Trollope;
+
 /**
  * Everything about one replicate of one climate path that does not depend on the management
  * policy, computed once and shared read-only by every policy evaluated on it (common random
@@ -34,10 +36,27 @@ public final class Forcing {
   /** Grass fuel moisture in the late-dry burning month (%). */
   final double fuelMoistureLatePercent;
   final double[] co2Ppm;
+  /**
+   * Trollope's fuel-moisture term 530 sqrt(FM) of the early- and late-dry fuel moisture
+   * ({@code Trollope.moistureTerm}), computed once so that the yearly loop only adds the fuel.
+   */
+  final double moistureTermEarly;
+  final double moistureTermLate;
+  /** Trollope's humidity term 0.1907 RH^2 of {@link #humidityEarlyPercent} (kW/m). */
+  final double[] humidityTermEarly;
+  /** Trollope's humidity term 0.1907 RH^2 of {@link #humidityLatePercent} (kW/m). */
+  final double[] humidityTermLate;
   /** Chance-of-unplanned-fire factor from the length of the dry season (0..1). */
   final double[] curedSeasonFactor;
   /** Uniform draw deciding an unplanned ignition (fire stream, index block * 4). */
   final double[] ignitionDraw;
+  /**
+   * Bounds on the yearly ignition rate that decide the ignition test without an exponential
+   * ({@link Fire#ignitionBounds}): above {@code ignitionLitAbove} a fire is surely lit, below
+   * {@code ignitionUnlitBelow} surely not; in between the exact test is made.
+   */
+  final double[] ignitionLitAbove;
+  final double[] ignitionUnlitBelow;
   /** Uniform draw setting an unplanned fire's extent (fire stream, index block * 4 + 1). */
   final double[] extentDraw;
   /** Animals with a noise draw per year: herbivores, then predators. */
@@ -64,6 +83,12 @@ public final class Forcing {
     this.fuelMoistureEarlyPercent = fuelMoistureEarlyPercent;
     this.fuelMoistureLatePercent = fuelMoistureLatePercent;
     this.co2Ppm = co2Ppm.clone();
+    this.moistureTermEarly = Trollope.moistureTerm(fuelMoistureEarlyPercent);
+    this.moistureTermLate = Trollope.moistureTerm(fuelMoistureLatePercent);
+    this.humidityTermEarly = new double[n];
+    this.humidityTermLate = new double[n];
+    this.ignitionLitAbove = new double[n];
+    this.ignitionUnlitBelow = new double[n];
     this.curedSeasonFactor = new double[n];
     this.ignitionDraw = new double[n];
     this.extentDraw = new double[n];

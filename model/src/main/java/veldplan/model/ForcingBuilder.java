@@ -6,6 +6,7 @@ import veldplan.model.ecology.Co2Response;
 import veldplan.model.ecology.GrowingPeriod;
 import veldplan.model.ecology.Linacre;
 import veldplan.model.ecology.ThornthwaiteMather;
+import veldplan.model.ecology.Trollope;
 import veldplan.model.ecology.YanHunt;
 import veldplan.shared.rng.CounterRandom;
 
@@ -163,6 +164,8 @@ public final class ForcingBuilder {
       for (int b = 0; b < blocks; b++) {
         out.ignitionDraw[y * blocks + b] = CounterRandom.uniform(fireKey, y, b * 4);
         out.extentDraw[y * blocks + b] = CounterRandom.uniform(fireKey, y, b * 4 + 1);
+        Fire.ignitionBounds(out.ignitionDraw[y * blocks + b], out.ignitionLitAbove,
+            out.ignitionUnlitBelow, y * blocks + b);
       }
     }
     double[] rain = new double[12];
@@ -250,6 +253,8 @@ public final class ForcingBuilder {
             seasons.indexInYear(seasons.earlyBurnMonth()), bp.altitudeM[b], annualRange);
         out.humidityLatePercent[at] = afternoonHumidityPercent(weather, y,
             seasons.indexInYear(seasons.lateBurnMonth()), bp.altitudeM[b], annualRange);
+        out.humidityTermEarly[at] = Trollope.humidityTerm(out.humidityEarlyPercent[at]);
+        out.humidityTermLate[at] = Trollope.humidityTerm(out.humidityLatePercent[at]);
       }
     }
     return out;

@@ -214,42 +214,54 @@ final class Herbivory {
       supply[at + HIGH_BROWSE] = bp.areaHa[b] * browseUse * s.highBrowseKgPerHa[b];
     }
 
-    // What each herbivore can use: supply within its reach that it accepts, split by its diet;
-    // and its shares p_hk of that total. Kept per pool, [pool][(h * blocks + b) * 2 + kind].
+    // What each herbivore can use: supply within its reach that it accepts, split by its diet,
+    // and its total. Kept per pool, [pool][(h * blocks + b) * 2 + kind].
     // (reach x acceptance is kept by updateReach: the same product, in the same order.)
-    double[] grassShares = s.resourceShare[0];
-    double[] browseShares = s.resourceShare[1];
+    double[] grassForage = s.categoryForageKg[0];
+    double[] browseForage = s.categoryForageKg[1];
     double[] grassWeight = s.usableWeight[0];
     double[] browseWeight = s.usableWeight[1];
+    // Block by block, herbivore by herbivore within the block: each herbivore's forage is still
+    // summed in the order tall, short, low, high of block 0, then of block 1, ... (the same
+    // bits), but the sums of different herbivores are independent and overlap in the CPU
+    // instead of waiting on each other's additions.
+    double[] forage = s.forageKg;
     for (int h = 0; h < herbivores; h++) {
-      double grassShare = s.grassDiet[h];
-      double browseShare = 1 - grassShare;
-      double forage = 0;
-      int row = h * blocks * KINDS_PER_POOL;
-      for (int b = 0; b < blocks; b++) {
-        int j = row + b * KINDS_PER_POOL;
-        int at = CATEGORIES_PER_BLOCK * b;
-        double tall = grassWeight[j] * grassShare * supply[at + TALL];
-        double short_ = grassWeight[j + 1] * grassShare * supply[at + SHORT];
-        double low = browseWeight[j] * browseShare * supply[at + LOW_BROWSE];
-        double high = browseWeight[j + 1] * browseShare * supply[at + HIGH_BROWSE];
-        grassShares[j] = tall;
-        grassShares[j + 1] = short_;
-        browseShares[j] = low;
-        browseShares[j + 1] = high;
-        forage += tall;
-        forage += short_;
-        forage += low;
-        forage += high;
+      forage[h] = 0;
+    }
+    double[] diet = s.grassDiet;
+    for (int b = 0; b < blocks; b++) {
+      int at = CATEGORIES_PER_BLOCK * b;
+      double tallSupply = supply[at + TALL];
+      double shortSupply = supply[at + SHORT];
+      double lowSupply = supply[at + LOW_BROWSE];
+      double highSupply = supply[at + HIGH_BROWSE];
+      for (int h = 0; h < herbivores; h++) {
+        double grassShare = diet[h];
+        double browseShare = 1 - grassShare;
+        int j = (h * blocks + b) * KINDS_PER_POOL;
+        double tall = grassWeight[j] * grassShare * tallSupply;
+        double short_ = grassWeight[j + 1] * grassShare * shortSupply;
+        double low = browseWeight[j] * browseShare * lowSupply;
+        double high = browseWeight[j + 1] * browseShare * highSupply;
+        grassForage[j] = tall;
+        grassForage[j + 1] = short_;
+        browseForage[j] = low;
+        browseForage[j + 1] = high;
+        double sum = forage[h];
+        sum += tall;
+        sum += short_;
+        sum += low;
+        sum += high;
+        forage[h] = sum;
       }
-      s.forageKg[h] = forage;
-      if (forage > 0) {
-        double inverse = 1 / forage;
-        for (int j = row; j < row + blocks * KINDS_PER_POOL; j++) {
-          grassShares[j] *= inverse;
-          browseShares[j] *= inverse;
-        }
-      }
+    }
+    // The shares p_hk are these amounts times 1 / forage_h, taken where they are used
+    // (compete): the same product as normalising them here, without a pass over the rows.
+    double[] inverseForage = s.inverseForage;
+    for (int h = 0; h < herbivores; h++) {
+      double total = forage[h];
+      inverseForage[h] = total > 0 ? 1 / total : 1;
     }
   }
 
@@ -268,100 +280,120 @@ final class Herbivory {
     // demand_o x pool_o / forage_o (see the class comment), the same in every category of the
     // pool, and the overlap weights, kept by updateReach, do the rest.
     double[] sharedDemand = s.sharedDemandKg;
+    double[] perUnit = s.demandPerUnitSupply;
     for (int o = 0; o < herbivores; o++) {
       double demand = s.abundance[o] * hp.sharedIntakeKgPerYear[o];
       sharedDemand[o] = demand;
       double forage = s.forageKg[o];
       double perForage = forage > 0 ? demand / forage : 0;
-      for (int pool = 0; pool < POOLS; pool++) {
-        double q = perForage * (pool == 0 ? s.grassDiet[o] : 1 - s.grassDiet[o]);
-        double[] weights = s.overlap[o * POOLS + pool];
-        double[] depletion = s.depletion[pool];
-        if (o == 0) {
-          for (int j = 0; j < span; j++) {
-            depletion[j] = q * weights[j];
-          }
-        } else {
-          for (int j = 0; j < span; j++) {
-            depletion[j] += q * weights[j];
-          }
-        }
+      perUnit[o * POOLS] = perForage * s.grassDiet[o];
+      perUnit[o * POOLS + 1] = perForage * (1 - s.grassDiet[o]);
+    }
+    // depletion = sum over o of q_o x weights_o, added in the order o = 0, 1, 2, ... as
+    // ((q0 w0 + q1 w1) + q2 w2) + ...; three herbivores per pass over the row (same sums, same
+    // order, same bits as one pass per herbivore, with a third of the loads and stores).
+    for (int pool = 0; pool < POOLS; pool++) {
+      double[] depletion = s.depletion[pool];
+      int o = 0;
+      for (; o + 3 <= herbivores; o += 3) {
+        addThree(depletion, span, o == 0,
+            perUnit[o * POOLS + pool], s.overlap[o * POOLS + pool],
+            perUnit[(o + 1) * POOLS + pool], s.overlap[(o + 1) * POOLS + pool],
+            perUnit[(o + 2) * POOLS + pool], s.overlap[(o + 2) * POOLS + pool]);
+      }
+      for (; o < herbivores; o++) {
+        addOne(depletion, span, o == 0, perUnit[o * POOLS + pool], s.overlap[o * POOLS + pool]);
       }
     }
     // Per category: the share of h's forage times the depletion there, and the share of its
     // demand met there: all of it unless the category is over-used (depletion above 1), where
-    // it gets share / depletion. Loops over rows indexed alike, which the JIT vectorises.
-    for (int pool = 0; pool < POOLS; pool++) {
-      double[] depletion = s.depletion[pool];
-      double[] shares = s.resourceShare[pool];
-      double[] pressure = s.pressureTerm[pool];
-      double[] got = s.demandMet[pool];
-      for (int j = 0; j < span; j++) {
-        double d = depletion[j];
-        pressure[j] = shares[j] * d;
-        got[j] = shares[j] / Math.max(1, d);
-      }
-    }
-    double[] grassShares = s.resourceShare[0];
-    double[] browseShares = s.resourceShare[1];
-    double[] grassPressure = s.pressureTerm[0];
-    double[] browsePressure = s.pressureTerm[1];
-    double[] grassGot = s.demandMet[0];
-    double[] browseGot = s.demandMet[1];
+    // it gets share / depletion. One pass over each herbivore's row, summed category by
+    // category (tall, short, low, high of each block). A category h does not use (share 0)
+    // adds exactly 0 to every sum (the depletion is finite), so no test is needed; and where
+    // the depletion is at most 1, share / max(1, d) is share itself, so the division is done
+    // only where d > 1 (both give the same bits). High browse is not in the browsed share.
+    double[] grassForage = s.categoryForageKg[0];
+    double[] browseForage = s.categoryForageKg[1];
+    double[] inverseForage = s.inverseForage;
+    double[] grassDepletion = s.depletion[0];
+    double[] browseDepletion = s.depletion[1];
     double[] grazedKg = s.grazedFraction;
     double[] browsedKg = s.browsePressure;
     double[] elephantUse = s.elephantsPerKm2;
     for (int b = 0; b < blocks; b++) {
       grazedKg[b] = 0;
       browsedKg[b] = 0;
-      elephantUse[b] = 0;
     }
-    // Summed category by category (tall, short, low, high of each block); a category h does not
-    // use (share 0) adds nothing.
     for (int h = 0; h < herbivores; h++) {
       double demand = sharedDemand[h];
+      double inverse = inverseForage[h];
       double pressure = 0;
       for (int b = 0; b < blocks; b++) {
         int j = (h * blocks + b) * KINDS_PER_POOL;
+        double tall = grassForage[j] * inverse;
+        double short_ = grassForage[j + 1] * inverse;
+        double low = browseForage[j] * inverse;
+        double high = browseForage[j + 1] * inverse;
+        double dTall = grassDepletion[j];
+        double dShort = grassDepletion[j + 1];
+        double dLow = browseDepletion[j];
+        double dHigh = browseDepletion[j + 1];
+        pressure += tall * dTall;
+        pressure += short_ * dShort;
+        pressure += low * dLow;
+        pressure += high * dHigh;
         double grazed = grazedKg[b];
-        double browsed = browsedKg[b];
-        double used = 0;
-        double tall = grassShares[j];
-        if (tall != 0) {
-          pressure += grassPressure[j];
-          grazed += demand * grassGot[j];
-          used += tall;
-        }
-        double short_ = grassShares[j + 1];
-        if (short_ != 0) {
-          pressure += grassPressure[j + 1];
-          grazed += demand * grassGot[j + 1];
-          used += short_;
-        }
-        double low = browseShares[j];
-        if (low != 0) {
-          pressure += browsePressure[j];
-          browsed += demand * browseGot[j];
-          used += low;
-        }
-        double high = browseShares[j + 1];
-        if (high != 0) {
-          pressure += browsePressure[j + 1];
-          used += high;
-        }
+        grazed += demand * (dTall > 1 ? tall / dTall : tall);
+        grazed += demand * (dShort > 1 ? short_ / dShort : short_);
         grazedKg[b] = grazed;
-        browsedKg[b] = browsed;
-        if (h == e) {
-          elephantUse[b] = used;
-        }
+        browsedKg[b] += demand * (dLow > 1 ? low / dLow : low);
       }
       s.pressureKg[h] = pressure * s.forageKg[h];
+    }
+    // The share of each block the elephants use: the sum of their shares there.
+    for (int b = 0; b < blocks; b++) {
+      int j = (e * blocks + b) * KINDS_PER_POOL;
+      double inverse = inverseForage[e];
+      double used = 0;
+      used += grassForage[j] * inverse;
+      used += grassForage[j + 1] * inverse;
+      used += browseForage[j] * inverse;
+      used += browseForage[j + 1] * inverse;
+      elephantUse[b] = used;
     }
     for (int b = 0; b < blocks; b++) {
       // Eaten kg/ha for now; eat() turns both into shares of what there was.
       grazedKg[b] /= bp.areaHa[b];
       browsedKg[b] /= bp.areaHa[b];
       elephantUse[b] *= s.abundance[e] / bp.areaKm2[b];
+    }
+  }
+
+  /** depletion = (first ? 0 : depletion) + q0 w0 + q1 w1 + q2 w2, added left to right. */
+  private static void addThree(double[] depletion, int span, boolean first, double q0,
+      double[] w0, double q1, double[] w1, double q2, double[] w2) {
+    if (first) {
+      for (int j = 0; j < span; j++) {
+        depletion[j] = q0 * w0[j] + q1 * w1[j] + q2 * w2[j];
+      }
+    } else {
+      for (int j = 0; j < span; j++) {
+        depletion[j] = depletion[j] + q0 * w0[j] + q1 * w1[j] + q2 * w2[j];
+      }
+    }
+  }
+
+  /** depletion = (first ? 0 : depletion) + q w. */
+  private static void addOne(double[] depletion, int span, boolean first, double q,
+      double[] w) {
+    if (first) {
+      for (int j = 0; j < span; j++) {
+        depletion[j] = q * w[j];
+      }
+    } else {
+      for (int j = 0; j < span; j++) {
+        depletion[j] = depletion[j] + q * w[j];
+      }
     }
   }
 

@@ -50,4 +50,66 @@ public final class Trollope {
         - 0.1907 * relativeHumidityPercent * relativeHumidityPercent - 596 / wind;
     return Math.max(0, intensity);
   }
+
+  // ---- The same regression split into its terms, for a caller that evaluates it for many fuel
+  // loads under weather known in advance (the model: the weather terms once per replicate, the
+  // fuel term every year). fireIntensityOfTerms(FL, moistureTerm(FM), humidityTerm(RH),
+  // windTerm(W)) performs the same operations in the same order as fireIntensityKwPerM(FL, FM,
+  // RH, W), so the two give the same bits (TrollopeTest checks this over a grid).
+
+  /**
+   * The fuel-moisture term of the regression, 530 √FM [1].
+   *
+   * @param fuelMoisturePercent fuel moisture FM (% of dry mass), &ge; 0
+   * @return 530 √FM (kW/m)
+   * @throws IllegalArgumentException if the moisture is negative or not finite
+   */
+  public static double moistureTerm(double fuelMoisturePercent) {
+    Arguments.nonNegative(fuelMoisturePercent, "fuelMoisturePercent");
+    return 530 * Math.sqrt(fuelMoisturePercent);
+  }
+
+  /**
+   * The relative-humidity term of the regression, 0.1907 RH² [1].
+   *
+   * @param relativeHumidityPercent relative humidity RH (%), in [0, 100]
+   * @return 0.1907 RH² (kW/m)
+   * @throws IllegalArgumentException if the humidity is out of range
+   */
+  public static double humidityTerm(double relativeHumidityPercent) {
+    Arguments.inClosedRange(relativeHumidityPercent, 0, 100, "relativeHumidityPercent");
+    return 0.1907 * relativeHumidityPercent * relativeHumidityPercent;
+  }
+
+  /**
+   * The wind term of the regression, 596 / W with W floored at {@link #MIN_WIND_SPEED_M_PER_S}
+   * [1].
+   *
+   * @param windSpeedMPerS wind speed W (m/s), &ge; 0
+   * @return 596 / max(0.5, W) (kW/m)
+   * @throws IllegalArgumentException if the wind speed is negative or not finite
+   */
+  public static double windTerm(double windSpeedMPerS) {
+    Arguments.nonNegative(windSpeedMPerS, "windSpeedMPerS");
+    return 596 / Math.max(MIN_WIND_SPEED_M_PER_S, windSpeedMPerS);
+  }
+
+  /**
+   * Fire intensity from the fuel load and the three weather terms already computed:
+   * max(0, 2729 + 0.8684 FL − moisture − humidity − wind), the same as
+   * {@link #fireIntensityKwPerM} to the last bit when the terms come from {@link #moistureTerm},
+   * {@link #humidityTerm} and {@link #windTerm}. No argument checks: the terms were checked
+   * where they were computed, and the caller guarantees FL &ge; 0.
+   *
+   * @param fuelLoadKgPerHa fuel load FL (kg/ha), &ge; 0
+   * @param moistureTerm    {@link #moistureTerm} of the fuel moisture
+   * @param humidityTerm    {@link #humidityTerm} of the relative humidity
+   * @param windTerm        {@link #windTerm} of the wind speed
+   * @return FI (kW/m), &ge; 0
+   */
+  public static double fireIntensityOfTerms(double fuelLoadKgPerHa, double moistureTerm,
+      double humidityTerm, double windTerm) {
+    double intensity = 2729 + 0.8684 * fuelLoadKgPerHa - moistureTerm - humidityTerm - windTerm;
+    return Math.max(0, intensity);
+  }
 }

@@ -56,4 +56,37 @@ class TrollopeTest {
     assertThrows(IllegalArgumentException.class,
         () -> Trollope.fireIntensityKwPerM(Double.NaN, 10, 30, 3));
   }
+
+  @Test
+  void fireIntensityOfTerms_overAGrid_isBitIdenticalToTheRegression() {
+    // The split form (weather terms computed once, the fuel term every year) must give the
+    // same bits as the published regression: same operations, same order. Arithmetic identity,
+    // no outside values; a perturbed coefficient in either form fails this exactly.
+    int compared = 0;
+    for (int i = 0; i <= 320; i++) {
+      double fuel = 37.3 * i;
+      for (int m = 0; m <= 32; m++) {
+        double moisture = 3.7 * m;
+        for (int r = 0; r <= 16; r++) {
+          double humidity = 6.1 * r;
+          for (double wind : new double[] {0, 0.3, 0.5, 1.7, 3, 8.9}) {
+            double reference = Trollope.fireIntensityKwPerM(fuel, moisture, humidity, wind);
+            double split = Trollope.fireIntensityOfTerms(fuel, Trollope.moistureTerm(moisture),
+                Trollope.humidityTerm(humidity), Trollope.windTerm(wind));
+            assertEquals(Double.doubleToLongBits(reference), Double.doubleToLongBits(split),
+                () -> "FL " + fuel + " FM " + moisture + " RH " + humidity + " W " + wind);
+            compared++;
+          }
+        }
+      }
+    }
+    assertTrue(compared > 100_000);
+  }
+
+  @Test
+  void terms_checkTheirArguments() {
+    assertThrows(IllegalArgumentException.class, () -> Trollope.moistureTerm(-1));
+    assertThrows(IllegalArgumentException.class, () -> Trollope.humidityTerm(100.5));
+    assertThrows(IllegalArgumentException.class, () -> Trollope.windTerm(Double.NaN));
+  }
 }
