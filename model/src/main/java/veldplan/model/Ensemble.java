@@ -59,15 +59,37 @@ public final class Ensemble {
             try {
               simulator.run(plan, study.forcing(path, replicate), state, trajectory);
             } catch (RuntimeException e) {
-              throw new IllegalStateException(e.getMessage() + " (climate path \""
-                  + study.paths().get(path).name() + "\", replicate " + (replicate + 1)
-                  + ", scenario seed " + study.seed() + ", policy \"" + plan.name() + "\")", e);
+              throw failure(study, path, replicate, plan, e);
             }
             out[path][replicate] = trajectory;
             progress.runFinished();
           }
         }));
       }
+      awaitAll(tasks);
+    } finally {
+      pool.shutdownNow();
+    }
+    return out;
+  }
+
+  /**
+   * A failed run's exception with what is needed to repeat it: the climate path, the replicate
+   * (1-based), the scenario seed and the policy.
+   */
+  public static IllegalStateException failure(Study study, int path, int replicate,
+      ManagementPlan plan, RuntimeException e) {
+    return new IllegalStateException(e.getMessage() + " (climate path \""
+        + study.paths().get(path).name() + "\", replicate " + (replicate + 1)
+        + ", scenario seed " + study.seed() + ", policy \"" + plan.name() + "\")", e);
+  }
+
+  /**
+   * Waits for every task; rethrows the first failure as it was thrown in the task (a runtime
+   * exception) or wrapped in an {@link IllegalStateException}.
+   */
+  public static void awaitAll(List<Future<?>> tasks) {
+    try {
       for (Future<?> task : tasks) {
         task.get();
       }
@@ -80,9 +102,6 @@ public final class Ensemble {
         throw (RuntimeException) cause;
       }
       throw new IllegalStateException(cause);
-    } finally {
-      pool.shutdownNow();
     }
-    return out;
   }
 }

@@ -131,15 +131,16 @@ public final class OptimiseCommand implements Callable<Integer> {
     PrintWriter stdout = spec.commandLine().getOut();
     Instant started = Instant.now();
     List<String> problems = new ArrayList<>();
-    range(problems, "--generations", generations, 0, 100_000);
-    range(problems, "--population", population, 4, 100_000);
+    CommandLineProblems.range(problems, "--generations", generations, 0, 100_000);
+    CommandLineProblems.range(problems, "--population", population, 4, 100_000);
     if (population != null && population % 2 != 0) {
       problems.add("--population: " + population + " is odd (expected an even number: parents"
           + " are paired)");
     }
-    range(problems, "--replicates", replicates, 1, 100_000);
-    range(problems, "--validation-replicates", validationReplicates, 1, 100_000);
-    range(problems, "--threads", threads, 1, 1024);
+    CommandLineProblems.range(problems, "--replicates", replicates, 1, 100_000);
+    CommandLineProblems.range(problems, "--validation-replicates", validationReplicates, 1,
+        100_000);
+    CommandLineProblems.range(problems, "--threads", threads, 1, 1024);
     PathStep overPathsRule = null;
     if (overPaths != null) {
       overPathsRule = parseOverPaths(overPaths);
@@ -160,7 +161,7 @@ public final class OptimiseCommand implements Callable<Integer> {
           + " it with --resume, or choose another --out");
     }
     if (!problems.isEmpty()) {
-      return commandLineProblems(err, problems);
+      return CommandLineProblems.report(err, problems);
     }
 
     LoadedScenario loaded;
@@ -192,7 +193,7 @@ public final class OptimiseCommand implements Callable<Integer> {
         return ExitCodes.BAD_INPUT;
       }
       if (!CHECKPOINT_FORMAT.equals(checkpoint.format())) {
-        return commandLineProblems(err, List.of(checkpointFile + ": format \""
+        return CommandLineProblems.report(err, List.of(checkpointFile + ": format \""
             + checkpoint.format() + "\" (expected \"" + CHECKPOINT_FORMAT + "\")"));
       }
     }
@@ -210,8 +211,9 @@ public final class OptimiseCommand implements Callable<Integer> {
         : new PathStep(o.overPaths(), o.pathPercentile() == null ? Double.NaN
             : o.pathPercentile());
     if (search.population() % 2 != 0) {
-      return commandLineProblems(err, List.of(scenarioFile + ": /optimisation/search/population"
-          + ": " + search.population() + " is odd (expected an even number: parents are paired)"));
+      return CommandLineProblems.report(err, List.of(scenarioFile
+          + ": /optimisation/search/population: " + search.population()
+          + " is odd (expected an even number: parents are paired)"));
     }
     if (checkpoint != null) {
       List<String> mismatch = new ArrayList<>();
@@ -236,7 +238,7 @@ public final class OptimiseCommand implements Callable<Integer> {
       if (!mismatch.isEmpty()) {
         List<String> lines = new ArrayList<>();
         mismatch.forEach(m -> lines.add("--resume: " + m));
-        return commandLineProblems(err, lines);
+        return CommandLineProblems.report(err, lines);
       }
     }
     int workers = threads != null ? threads : Runtime.getRuntime().availableProcessors();
@@ -448,19 +450,7 @@ public final class OptimiseCommand implements Callable<Integer> {
     }
   }
 
-  private static void range(List<String> problems, String name, Integer value, int min,
-      int max) {
-    if (value != null && (value < min || value > max)) {
-      problems.add(name + ": " + value + " (expected " + min + " <= N <= " + max + ")");
-    }
-  }
 
-  private static int commandLineProblems(PrintWriter err, List<String> problems) {
-    err.println("error: " + problems.size() + " problem(s) on the command line");
-    problems.forEach(p -> err.println("  " + p));
-    err.flush();
-    return ExitCodes.BAD_INPUT;
-  }
 
   private static void removeStalePolicies(Path folder, Set<Path> keep) throws IOException {
     try (DirectoryStream<Path> files = Files.newDirectoryStream(folder, "P*.yaml")) {

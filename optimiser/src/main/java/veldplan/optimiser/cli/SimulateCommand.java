@@ -101,18 +101,14 @@ public final class SimulateCommand implements Callable<Integer> {
     PrintWriter stdout = spec.commandLine().getOut();
     Instant started = Instant.now();
     List<String> optionProblems = new ArrayList<>();
-    if (replicates != null && (replicates < 1 || replicates > 100_000)) {
-      optionProblems.add("--replicates: " + replicates + " (expected 1 <= N <= 100000)");
-    }
-    if (threads != null && (threads < 1 || threads > 1024)) {
-      optionProblems.add("--threads: " + threads + " (expected 1 <= N <= 1024)");
-    }
+    CommandLineProblems.range(optionProblems, "--replicates", replicates, 1, 100_000);
+    CommandLineProblems.range(optionProblems, "--threads", threads, 1, 1024);
     if (Files.exists(out) && !Files.isDirectory(out)) {
       optionProblems.add("--out: " + out + " exists and is not a folder (expected a folder to "
           + "write into, or a name for a new one)");
     }
     if (!optionProblems.isEmpty()) {
-      return commandLineProblems(err, optionProblems);
+      return CommandLineProblems.report(err, optionProblems);
     }
 
     LoadedScenario loaded;
@@ -123,7 +119,7 @@ public final class SimulateCommand implements Callable<Integer> {
       policy = policyFile == null ? sc.policy() : ScenarioReader.readPolicy(policyFile, sc);
       List<String> names = sc.climate().paths().stream().map(ClimatePath::name).toList();
       if (pathName != null && !names.contains(pathName)) {
-        return commandLineProblems(err, List.of("--path: no climate path named \"" + pathName
+        return CommandLineProblems.report(err, List.of("--path: no climate path named \"" + pathName
             + "\" in " + scenarioFile + " (expected one of " + String.join(", ", names) + ")"));
       }
       Stochastic st = sc.stochastic();
@@ -286,12 +282,6 @@ public final class SimulateCommand implements Callable<Integer> {
     }
   }
 
-  private static int commandLineProblems(PrintWriter err, List<String> problems) {
-    err.println("error: " + problems.size() + " problem(s) on the command line");
-    problems.forEach(p -> err.println("  " + p));
-    err.flush();
-    return ExitCodes.BAD_INPUT;
-  }
 
   private String provenance(LoadedScenario loaded, Policy policy, List<String> pathNames,
       Study study, int workers, Instant started, Instant finished) throws IOException {

@@ -2,12 +2,12 @@ package veldplan.optimiser.park;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
 import java.util.concurrent.atomic.AtomicInteger;
 import veldplan.model.EcosystemState;
+import veldplan.model.Ensemble;
 import veldplan.model.ManagementPlan;
 import veldplan.model.ModelParameters;
 import veldplan.model.ParametersFromScenario;
@@ -118,9 +118,7 @@ public final class ParkEvaluator implements AutoCloseable {
           try {
             simulator.run(plan, study.forcing(path, replicate), state, trajectory);
           } catch (RuntimeException e) {
-            throw new IllegalStateException(e.getMessage() + " (climate path \""
-                + study.paths().get(path).name() + "\", replicate " + (replicate + 1)
-                + ", scenario seed " + study.seed() + ", policy \"" + plan.name() + "\")", e);
+            throw Ensemble.failure(study, path, replicate, plan, e);
           }
           for (int k = 0; k < m; k++) {
             values[job * m + k] = measures.get(k).of(trajectory);
@@ -129,20 +127,7 @@ public final class ParkEvaluator implements AutoCloseable {
         }
       }));
     }
-    try {
-      for (Future<?> task : tasks) {
-        task.get();
-      }
-    } catch (InterruptedException e) {
-      Thread.currentThread().interrupt();
-      throw new IllegalStateException("interrupted", e);
-    } catch (ExecutionException e) {
-      Throwable cause = e.getCause();
-      if (cause instanceof RuntimeException) {
-        throw (RuntimeException) cause;
-      }
-      throw new IllegalStateException(cause);
-    }
+    Ensemble.awaitAll(tasks);
 
     PolicyScore[] out = new PolicyScore[policies.size()];
     double[] runs = new double[replicates];
