@@ -38,7 +38,8 @@ import java.util.random.RandomGeneratorFactory;
  *       of P<sub>t</sub> are paired off, so every individual plays exactly two tournaments and N
  *       parents are chosen.</li>
  *   <li><i>Variation.</i> Parents 2k and 2k+1 give two children by bounded SBX
- *       ({@link Sbx#crossPair}, probability p<sub>c</sub>) [2], then each child gene undergoes
+ *       ({@link Sbx#crossPair}, probability p<sub>c</sub>) [2]; each variable goes to either
+ *       child at random, crossed or not (see {@link Sbx}), then each child gene undergoes
  *       bounded polynomial mutation with probability p<sub>m</sub>
  *       ({@link PolynomialMutation}) [3].</li>
  *   <li><i>Evaluation</i> of the N children Q<sub>t</sub> in one batch through the Jenetics

@@ -25,10 +25,19 @@ import java.util.random.RandomGenerator;
  * [yl, yu]. The spread distribution is truncated so that children stay in range. With infinite
  * bounds &alpha; = 2 and the bounded form is the unbounded one.
  *
- * <p><b>Per pair</b> ({@link #crossPair}) as in [2]: with probability p<sub>c</sub> the pair is
- * recombined; then each variable is crossed with probability 0.5 (if the parents differ by more
- * than {@link #EPS}), and the two children's values are swapped with probability 0.5. Otherwise
- * the children are copies of the parents.
+ * <p><b>Per pair</b> ({@link #crossPair}): with probability p<sub>c</sub> the pair is recombined;
+ * then each variable is crossed with probability 0.5 (if the parents differ by more than
+ * {@link #EPS}) as in [2], and the two children's values of <em>every</em> variable, crossed or
+ * not, are swapped with probability 0.5. Otherwise the children are copies of the parents.
+ *
+ * <p>The reference code [2] swaps only the variables it crossed, so there a variable left alone
+ * stays with its parent; swapping every variable adds a uniform crossover of the untouched ones,
+ * as MOEA Framework 5.0's SBX does (its default swap). Measured with NSGA-II (population 100,
+ * 25,000 evaluations, seeds 1–11, median final-population hypervolume, r = 1.1): ZDT1 0.86963 →
+ * 0.86996, ZDT2 0.53626 → 0.53688, DTLZ2 0.70416 → 0.70179, archives 0.87482 → 0.87538, 0.54125
+ * → 0.54198, 0.79156 → 0.79142; README, "Multi-objective search engine against jMetal and MOEA
+ * Framework". The per-variable SBX itself (the check values of decision-methods §2.5) is
+ * unchanged.
  *
  * <p>References:
  * <ol>
@@ -133,20 +142,20 @@ public final class Sbx {
     }
     double[] pair = new double[2];
     for (int i = 0; i < n; i++) {
-      double a = parent1[i];
-      double b = parent2[i];
-      if (random.nextDouble() < 0.5 && Math.abs(a - b) > EPS) {
-        bounded(a, b, 0.0, 1.0, random.nextDouble(), eta, pair);
-        if (random.nextDouble() < 0.5) {
-          child1[i] = pair[1];
-          child2[i] = pair[0];
-        } else {
-          child1[i] = pair[0];
-          child2[i] = pair[1];
-        }
+      double first = parent1[i];
+      double second = parent2[i];
+      if (random.nextDouble() < 0.5 && Math.abs(first - second) > EPS) {
+        bounded(first, second, 0.0, 1.0, random.nextDouble(), eta, pair);
+        first = pair[0];
+        second = pair[1];
+      }
+      // Every variable, recombined or not, goes to either child with probability 0.5.
+      if (random.nextDouble() < 0.5) {
+        child1[i] = second;
+        child2[i] = first;
       } else {
-        child1[i] = a;
-        child2[i] = b;
+        child1[i] = first;
+        child2[i] = second;
       }
     }
   }

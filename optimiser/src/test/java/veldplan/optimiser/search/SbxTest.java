@@ -129,8 +129,10 @@ class SbxTest {
   }
 
   @Test
-  void crossPair_probabilityOne_crossesAboutHalfTheVariables() {
+  void crossPair_probabilityOne_crossesAboutHalfTheVariables_andSwapsEveryVariableAtRandom() {
     // Reference code: each variable crossed with probability 0.5 (decision-methods §2.5 [mem]).
+    // Then every variable, crossed or not, goes to either child with probability 0.5 (the
+    // uniform swap MOEA Framework 5.0's SBX applies; see the Sbx class comment).
     int n = 10_000;
     double[] p1 = new double[n];
     double[] p2 = new double[n];
@@ -139,15 +141,27 @@ class SbxTest {
     double[] c1 = new double[n];
     double[] c2 = new double[n];
     Sbx.crossPair(p1, p2, 1.0, 20, new SplittableRandom(5), c1, c2);
-    int changed = 0;
+    int crossed = 0;
+    int kept = 0;
+    int swapped = 0;
+    int lowerFirst = 0;
     for (int i = 0; i < n; i++) {
-      boolean copied = (c1[i] == 0.3 && c2[i] == 0.7);
-      if (!copied) {
-        changed++;
+      if (c1[i] == 0.3 && c2[i] == 0.7) {
+        kept++;
+      } else if (c1[i] == 0.7 && c2[i] == 0.3) {
+        swapped++;
+      } else {
+        crossed++;
         assertEquals(1.0, c1[i] + c2[i], 1e-3); // bounded: mean almost preserved
+        if (c1[i] < c2[i]) {
+          lowerFirst++;
+        }
       }
     }
     // Binomial(1e4, 0.5): sd 50; 5 sd, false failure probability about 6e-7.
-    assertEquals(n / 2.0, changed, 250);
+    assertEquals(n / 2.0, crossed, 250);
+    // Binomial(about 5000, 0.5): sd about 35; 5 sd.
+    assertEquals((kept + swapped) / 2.0, swapped, 180);
+    assertEquals(crossed / 2.0, lowerFirst, 180);
   }
 }
