@@ -79,9 +79,10 @@ public final class Ensemble {
    */
   public static IllegalStateException failure(Study study, int path, int replicate,
       ManagementPlan plan, RuntimeException e) {
+    String policy = plan.name().isBlank() ? "" : ", policy \"" + plan.name() + "\"";
     return new IllegalStateException(e.getMessage() + " (climate path \""
         + study.paths().get(path).name() + "\", replicate " + (replicate + 1)
-        + ", scenario seed " + study.seed() + ", policy \"" + plan.name() + "\")", e);
+        + ", scenario seed " + study.seed() + policy + ")", e);
   }
 
   /**

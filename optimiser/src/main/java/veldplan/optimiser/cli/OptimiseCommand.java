@@ -33,6 +33,7 @@ import picocli.CommandLine.Spec;
 import veldplan.objectives.Objective;
 import veldplan.objectives.PathStep;
 import veldplan.optimiser.park.Limit;
+import veldplan.optimiser.park.PolicyRunException;
 import veldplan.optimiser.park.PolicySearch;
 import veldplan.optimiser.report.FrontEntry;
 import veldplan.optimiser.report.FrontPlots;
@@ -381,6 +382,7 @@ public final class OptimiseCommand implements Callable<Integer> {
     } catch (RuntimeException e) {
       err.println("error: the search failed: "
           + (e.getMessage() != null ? e.getMessage() : e.getClass().getSimpleName()));
+      writeFailedPolicy(e, out, scenarioFile, err);
       err.println("The last completed generation is in " + checkpointFile + "; rerun with"
           + " --resume" + (debug ? "" : " --debug for the stack trace") + ".");
       if (debug) {
@@ -389,6 +391,43 @@ public final class OptimiseCommand implements Callable<Integer> {
       err.flush();
       return ExitCodes.FAILURE;
     }
+  }
+
+  /**
+   * If a simulation failed behind {@code e}, writes its policy to {@code out/failed-policy.yaml}
+   * and says how to repeat its runs; otherwise does nothing.
+   *
+   * @return the file written, or null
+   */
+  static Path writeFailedPolicy(Throwable e, Path out, Path scenarioFile, PrintWriter err) {
+    PolicyRunException failed = policyRunFailure(e);
+    if (failed == null) {
+      return null;
+    }
+    Path file = out.resolve("failed-policy.yaml");
+    String yaml = PolicyFile.yaml(failed.policy(), List.of(
+        "The policy whose simulation failed during a veldplan search; see the message"
+            + " printed with it.",
+        "Repeat its runs with: veldplan simulate SCENARIO --policy THIS_FILE --out DIR --debug"));
+    try {
+      AtomicFiles.writeAllStreams(Map.of(file, AtomicFiles.text(w -> w.write(yaml))));
+    } catch (IOException | RuntimeException io) {
+      err.println("(could not write the failed policy to " + file + ": " + io.getMessage() + ")");
+      return null;
+    }
+    err.println("The policy is in " + file + "; ./veldplan simulate " + scenarioFile
+        + " --policy " + file + " --out DIR --debug repeats its runs.");
+    return file;
+  }
+
+  /** The failed policy run behind {@code e}, if a simulation failed; otherwise null. */
+  private static PolicyRunException policyRunFailure(Throwable e) {
+    for (Throwable t = e; t != null; t = t.getCause()) {
+      if (t instanceof PolicyRunException p) {
+        return p;
+      }
+    }
+    return null;
   }
 
   /** What a checkpoint file holds: the settings that must not change, and the search state. */

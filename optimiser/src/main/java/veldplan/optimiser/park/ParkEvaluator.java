@@ -118,7 +118,9 @@ public final class ParkEvaluator implements AutoCloseable {
           try {
             simulator.run(plan, study.forcing(path, replicate), state, trajectory);
           } catch (RuntimeException e) {
-            throw Ensemble.failure(study, path, replicate, plan, e);
+            throw new PolicyRunException(
+                Ensemble.failure(study, path, replicate, plan, e).getMessage(),
+                policies.get(policy), e);
           }
           for (int k = 0; k < m; k++) {
             values[job * m + k] = measures.get(k).of(trajectory);

@@ -186,4 +186,30 @@ class OptimiseCommandTest {
     assertTrue(r.err().contains("/optimisation: missing"), r.err());
     assertFalse(Files.exists(dir.resolve("o")));
   }
+
+  @Test
+  void aFailedSimulation_leavesItsPolicyInAFileThatSimulateReads(@TempDir Path dir)
+      throws Exception {
+    Path scenarioFile = CliTestSupport.example("duskveld", "scenario.yaml");
+    veldplan.shared.scenario.Scenario scenario = ScenarioReader.load(scenarioFile).scenario();
+    veldplan.shared.scenario.Policy policy = scenario.policy();
+    RuntimeException failure = new IllegalStateException("evaluation failed",
+        new veldplan.optimiser.park.PolicyRunException("model state invalid", policy,
+            new IllegalStateException("negative grass")));
+    java.io.StringWriter text = new java.io.StringWriter();
+    Path file = OptimiseCommand.writeFailedPolicy(failure, dir, scenarioFile,
+        new java.io.PrintWriter(text, true));
+    assertEquals(dir.resolve("failed-policy.yaml"), file);
+    assertEquals(policy, ScenarioReader.readPolicy(file, scenario));
+    assertTrue(text.toString().contains("--policy " + file), text.toString());
+
+    // Any other failure writes nothing.
+    Path other = dir.resolve("other");
+    Files.createDirectories(other);
+    assertEquals(null, OptimiseCommand.writeFailedPolicy(new IllegalStateException("disk"),
+        other, scenarioFile, new java.io.PrintWriter(new java.io.StringWriter(), true)));
+    try (var listing = Files.list(other)) {
+      assertEquals(0, listing.count());
+    }
+  }
 }
