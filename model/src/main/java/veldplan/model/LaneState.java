@@ -63,8 +63,13 @@ final class LaneState {
   final double[] elephantsRemoved = new double[LANES];
   final double[] femalesTreated = new double[LANES];
 
-  // ---- scratch
+  // ---- scratch, lane-innermost
   final double[] nextClasses = new double[TreeClass.COUNT * LANES];
+  final double[][] categoryForageKg;
+  final double[] inverseForage;
+  final double[] sharedDemandKg;
+  final double[] demandPerUnitSupply;
+  final double[][] depletion;
 
   /** The lane arrays, in the order of {@link #scalarArrays}. */
   private final double[][] lanes;
@@ -100,6 +105,12 @@ final class LaneState {
     preyKg = lanes(herbivores);
     preyBiomassKg = lanes(predators);
     tallShare = lanes(blocks);
+    int pooled = herbivores * blocks * Herbivory.KINDS_PER_POOL;
+    categoryForageKg = new double[][] {lanes(pooled), lanes(pooled)};
+    inverseForage = lanes(herbivores);
+    sharedDemandKg = lanes(herbivores);
+    demandPerUnitSupply = lanes(herbivores * Herbivory.POOLS);
+    depletion = new double[][] {lanes(pooled), lanes(pooled)};
     lanes = new double[][] {treesPerHa, leftoverGrassKgPerHa, abundance, predatorAbundance,
         coverageHistory, grazedFraction, basalAreaM2PerHa, grassProductionKgPerHa, fuelKgPerHa,
         lowBrowseKgPerHa, highBrowseKgPerHa, browsePressure, plannedBurntFraction,

@@ -45,18 +45,21 @@ class LockstepProcessesTest {
     int compared = 0;
     for (int year = 0; year < p.years(); year++) {
       for (int process = 0; process < AnnualCycle.PROCESSES.length; process++) {
-        boolean lockstep = process == 1 || process == 3 || process == 4;
-        if (lockstep) {
-          for (int r = 0; r < lanes; r++) {
-            lane.pack(r, scalar[r]);
-          }
-          System.arraycopy(scalar[0].reach, 0, lane.shared.reach, 0, scalar[0].reach.length);
-          switch (process) {
-            case 1 -> LaneGrass.grow(p.grass(), p.trees(), laneForcing, year, lane);
-            case 3 -> LaneFire.burn(p, plan, laneForcing, year, lane);
-            case 4 -> LaneTrees.update(p, laneForcing, year, lane);
-            default -> throw new IllegalStateException();
-          }
+        boolean lockstep = true;
+        for (int r = 0; r < lanes; r++) {
+          lane.pack(r, scalar[r]);
+        }
+        copyPolicyState(scalar[0], lane.shared);
+        switch (process) {
+          case 0 -> LaneManagement.startOfYear(p, plan, year, lane);
+          case 1 -> LaneGrass.grow(p.grass(), p.trees(), laneForcing, year, lane);
+          case 2 -> LaneHerbivory.forageAndGraze(p, lane);
+          case 3 -> LaneFire.burn(p, plan, laneForcing, year, lane);
+          case 4 -> LaneTrees.update(p, laneForcing, year, lane);
+          case 5 -> LaneAnimals.hunt(p, lane);
+          case 6 -> LaneAnimals.breedAndDie(p, laneForcing, year, lane);
+          case 7 -> LaneManagement.endOfYear(p, plan, year, lane);
+          default -> throw new IllegalStateException();
         }
         for (int r = 0; r < lanes; r++) {
           scalar[r].year = year;
@@ -75,6 +78,19 @@ class LockstepProcessesTest {
     }
     System.out.printf(Locale.ROOT, "seed %d: %d lane states compared, worst relative"
         + " difference %.2e%n", seed, compared, worst);
+  }
+
+  /** The policy-only state the scalar run has reached, into the lockstep run's shared state. */
+  private static void copyPolicyState(EcosystemState from, EcosystemState to) {
+    System.arraycopy(from.waterPointsOpen, 0, to.waterPointsOpen, 0, from.waterPointsOpen.length);
+    System.arraycopy(from.reach, 0, to.reach, 0, from.reach.length);
+    for (int i = 0; i < from.usableWeight.length; i++) {
+      System.arraycopy(from.usableWeight[i], 0, to.usableWeight[i], 0,
+          from.usableWeight[i].length);
+    }
+    for (int i = 0; i < from.overlap.length; i++) {
+      System.arraycopy(from.overlap[i], 0, to.overlap[i], 0, from.overlap[i].length);
+    }
   }
 
   /** Largest relative difference over the state both engines keep; fails above tolerance. */
@@ -96,7 +112,9 @@ class LockstepProcessesTest {
   }
 
   private static double[][] arrays(EcosystemState s) {
-    return new double[][] {s.treesPerHa, s.leftoverGrassKgPerHa, s.abundance,
+    return new double[][] {new double[] {s.costBurning, s.costOfftake, s.costContraception, s.costWater,
+        s.elephantsRemoved, s.femalesTreated}, s.reach, s.treesPerHa, s.leftoverGrassKgPerHa,
+        s.abundance,
         s.predatorAbundance, s.coverageHistory, s.grazedFraction, s.basalAreaM2PerHa,
         s.grassProductionKgPerHa, s.fuelKgPerHa, s.lowBrowseKgPerHa, s.highBrowseKgPerHa,
         s.browsePressure, s.plannedBurntFraction, s.plannedIntensityKwPerM,
