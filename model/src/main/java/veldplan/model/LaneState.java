@@ -27,6 +27,8 @@ final class LaneState {
   final int lagSlots;
   /** Policy-only state (water points, reach, overlap weights), the same in every lane. */
   final EcosystemState shared;
+  /** One lane at a time, unpacked for recording (see {@link #unpack}). */
+  final EcosystemState view;
 
   // ---- carried from year to year, lane-innermost
   final double[] treesPerHa;
@@ -76,6 +78,7 @@ final class LaneState {
 
   LaneState(ModelParameters p) {
     shared = new EcosystemState(p);
+    view = new EcosystemState(p);
     blocks = shared.blocks;
     herbivores = shared.herbivores;
     predators = shared.predators;
