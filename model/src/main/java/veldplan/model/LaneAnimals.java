@@ -84,61 +84,79 @@ final class LaneAnimals {
   }
 
   static void breedAndDie(ModelParameters p, LaneForcing f, int year, LaneState s) {
+    for (int h = 0; h < s.herbivores; h++) {
+      herbivore(p, f, year, s, h);
+    }
+    for (int q = 0; q < s.predators; q++) {
+      predator(p, f, year, s, q);
+    }
+  }
+
+  /** Births and deaths of herbivore h (a guild or the elephants). */
+  private static void herbivore(ModelParameters p, LaneForcing f, int year, LaneState s,
+      int h) {
     HerbivoreParameters hp = p.herbivores();
-    PredatorParameters pp = p.predators();
-    ElephantParameters ep = p.elephants();
-    int herbivores = hp.count;
-    int e = hp.elephant;
-    int noiseRow = year * f.noiseSlots;
+    DoubleVector n = DoubleVector.fromArray(SPECIES, s.abundance, h * LANES);
+    VectorMask<Double> alive = n.compare(VectorOperators.NE, 0);
+    if (!alive.anyTrue()) {
+      return;
+    }
     DoubleVector minimum = DoubleVector.broadcast(SPECIES, Animals.MIN_LOG_GROWTH);
     DoubleVector one = DoubleVector.broadcast(SPECIES, 1.0);
-    DoubleVector zero = DoubleVector.zero(SPECIES);
-    for (int h = 0; h < herbivores; h++) {
-      DoubleVector noise = load(f.demographicNoise, noiseRow + h).mul(hp.noiseSd[h]);
-      DoubleVector n = load(s.abundance, h);
-      VectorMask<Double> alive = n.compare(VectorOperators.NE, 0);
-      if (!alive.anyTrue()) {
-        continue;
-      }
-      DoubleVector forage = load(s.forageKg, h);
-      DoubleVector depletion = load(s.pressureKg, h).div(forage);
-      DoubleVector food = hp.densityShape[h] == 1 ? depletion
-          : depletion.lanewise(VectorOperators.POW, hp.densityShape[h]);
-      DoubleVector logGrowth;
-      if (h == e) {
-        double births = ep.breedingFemaleFraction() * ep.calvesPerFemalePerYear();
-        DoubleVector coverage = year >= ep.gestationLagYears()
-            ? load(s.coverageHistory, (year - ep.gestationLagYears()) % s.lagSlots) : zero;
-        DoubleVector rate = coverage.mul(ep.contraceptionEfficacy()).neg().add(1).mul(births)
-            .add(1).sub(ep.mortalityPerYear()).max(1e-9).lanewise(VectorOperators.LOG);
-        double scale = Math.max(Animals.ELEPHANT_FOOD_RATE, hp.maxGrowthRatePerYear[h]);
-        logGrowth = rate.sub(food.mul(scale)).max(minimum);
-      } else {
-        logGrowth = one.sub(food).mul(hp.maxGrowthRatePerYear[h]).max(minimum);
-      }
-      logGrowth = minimum.blend(logGrowth, forage.compare(VectorOperators.GT, 0));
-      DoubleVector survival = one.sub(load(s.predationHazard, h).min(Animals.MAX_PREDATION));
-      DoubleVector next = n.mul(logGrowth.add(noise).lanewise(VectorOperators.EXP).mul(survival));
-      next = zero.blend(next, next.compare(VectorOperators.GE, 1));
-      store(n.blend(next, alive), s.abundance, h);
+    DoubleVector forage = DoubleVector.fromArray(SPECIES, s.forageKg, h * LANES);
+    DoubleVector depletion = DoubleVector.fromArray(SPECIES, s.pressureKg, h * LANES)
+        .div(forage);
+    double shape = hp.densityShape[h];
+    DoubleVector food = shape == 1 ? depletion
+        : depletion.lanewise(VectorOperators.POW, shape);
+    DoubleVector logGrowth = h == hp.elephant
+        ? elephantRate(p, year, s).sub(food.mul(
+            Math.max(Animals.ELEPHANT_FOOD_RATE, hp.maxGrowthRatePerYear[h]))).max(minimum)
+        : one.sub(food).mul(hp.maxGrowthRatePerYear[h]).max(minimum);
+    logGrowth = minimum.blend(logGrowth, forage.compare(VectorOperators.GT, 0));
+    DoubleVector noise = DoubleVector.fromArray(SPECIES, f.demographicNoise,
+        (year * f.noiseSlots + h) * LANES).mul(hp.noiseSd[h]);
+    DoubleVector survival = one.sub(DoubleVector.fromArray(SPECIES, s.predationHazard,
+        h * LANES).min(Animals.MAX_PREDATION));
+    DoubleVector next = n.mul(logGrowth.add(noise).lanewise(VectorOperators.EXP).mul(survival));
+    next = DoubleVector.zero(SPECIES).blend(next, next.compare(VectorOperators.GE, 1));
+    n.blend(next, alive).intoArray(s.abundance, h * LANES);
+  }
+
+  /**
+   * The elephants' log growth rate without food limitation: ln(1 + births (1 - efficacy x
+   * coverage a gestation earlier) - deaths), floored at ln(1e-9).
+   */
+  private static DoubleVector elephantRate(ModelParameters p, int year, LaneState s) {
+    ElephantParameters ep = p.elephants();
+    double births = ep.breedingFemaleFraction() * ep.calvesPerFemalePerYear();
+    DoubleVector coverage = year >= ep.gestationLagYears()
+        ? DoubleVector.fromArray(SPECIES, s.coverageHistory,
+            ((year - ep.gestationLagYears()) % s.lagSlots) * LANES)
+        : DoubleVector.zero(SPECIES);
+    return coverage.mul(ep.contraceptionEfficacy()).neg().add(1).mul(births).add(1)
+        .sub(ep.mortalityPerYear()).max(1e-9).lanewise(VectorOperators.LOG);
+  }
+
+  /** Births and deaths of predator guild q. */
+  private static void predator(ModelParameters p, LaneForcing f, int year, LaneState s, int q) {
+    PredatorParameters pp = p.predators();
+    DoubleVector n = DoubleVector.fromArray(SPECIES, s.predatorAbundance, q * LANES);
+    VectorMask<Double> alive = n.compare(VectorOperators.NE, 0);
+    if (!alive.anyTrue()) {
+      return;
     }
-    double perPrey = CarboneGittleman.CARNIVORE_KG_PER_10000_KG_PREY / 10_000;
-    for (int q = 0; q < pp.count; q++) {
-      DoubleVector noise = load(f.demographicNoise, noiseRow + herbivores + q)
-          .mul(pp.noiseSd[q]);
-      DoubleVector n = load(s.predatorAbundance, q);
-      VectorMask<Double> alive = n.compare(VectorOperators.NE, 0);
-      if (!alive.anyTrue()) {
-        continue;
-      }
-      // CarboneGittleman.carnivoreNumber: (90.1 / 10,000 x prey biomass) / body mass.
-      DoubleVector capacity = load(s.preyBiomassKg, q).mul(perPrey).div(pp.bodyMassKg[q]);
-      DoubleVector logGrowth = minimum.blend(
-          one.sub(n.div(capacity)).mul(pp.maxGrowthRatePerYear[q]).max(minimum),
-          capacity.compare(VectorOperators.GT, 0));
-      DoubleVector next = n.mul(logGrowth.add(noise).lanewise(VectorOperators.EXP));
-      next = zero.blend(next, next.compare(VectorOperators.GE, 1));
-      store(n.blend(next, alive), s.predatorAbundance, q);
-    }
+    DoubleVector minimum = DoubleVector.broadcast(SPECIES, Animals.MIN_LOG_GROWTH);
+    // CarboneGittleman.carnivoreNumber: (90.1 / 10,000 x prey biomass) / body mass.
+    DoubleVector capacity = DoubleVector.fromArray(SPECIES, s.preyBiomassKg, q * LANES)
+        .mul(CarboneGittleman.CARNIVORE_KG_PER_10000_KG_PREY / 10_000).div(pp.bodyMassKg[q]);
+    DoubleVector logGrowth = minimum.blend(DoubleVector.broadcast(SPECIES, 1.0)
+            .sub(n.div(capacity)).mul(pp.maxGrowthRatePerYear[q]).max(minimum),
+        capacity.compare(VectorOperators.GT, 0));
+    DoubleVector noise = DoubleVector.fromArray(SPECIES, f.demographicNoise,
+        (year * f.noiseSlots + s.herbivores + q) * LANES).mul(pp.noiseSd[q]);
+    DoubleVector next = n.mul(logGrowth.add(noise).lanewise(VectorOperators.EXP));
+    next = DoubleVector.zero(SPECIES).blend(next, next.compare(VectorOperators.GE, 1));
+    n.blend(next, alive).intoArray(s.predatorAbundance, q * LANES);
   }
 }

@@ -12,69 +12,89 @@ import veldplan.model.ecology.Trollope;
  * {@link Fire#burn} for every lane of a {@link LaneState} at once; see there for the model. The
  * planned burns depend on the policy and the year only, so a block burns in every lane or in
  * none; whether an unplanned fire is lit is decided lane by lane with the same test as
- * {@link Fire#ignites}, the exponential computed for every lane.
+ * {@link Fire#ignites}, the exponential computed for every lane. One small method per block and
+ * kind of fire, passing arrays (see {@link LaneTrees}).
  */
 final class LaneFire {
   private LaneFire() {}
 
   static void burn(ModelParameters p, ManagementPlan plan, LaneForcing f, int year,
       LaneState s) {
-    FireParameters fp = p.fire();
-    double[] areaKm2 = p.blocks().areaKm2;
-    double windTerm = Trollope.windTerm(fp.windSpeedMPerS());
-    DoubleVector zero = DoubleVector.zero(SPECIES);
-    DoubleVector one = DoubleVector.broadcast(SPECIES, 1.0);
-    DoubleVector moistureLate = DoubleVector.fromArray(SPECIES, f.moistureTermLate, 0);
-    DoubleVector moistureEarly = DoubleVector.fromArray(SPECIES, f.moistureTermEarly, 0);
-    int blocks = s.blocks;
-    for (int b = 0; b < blocks; b++) {
-      int at = b * LANES;
-      int forcingAt = (year * blocks + b) * LANES;
-      DoubleVector fuel = DoubleVector.fromArray(SPECIES, s.fuelKgPerHa, at);
-      // Fire.spreadFactor: 1 / (1 + exp(-(fuel - minimum) / scale)).
-      DoubleVector spread = one.div(fuel.sub(fp.minimumFuelKgPerHa()).neg()
-          .div(fp.fuelSpreadScaleKgPerHa()).lanewise(VectorOperators.EXP).add(1));
-      DoubleVector planned = zero;
-      DoubleVector plannedIntensity = zero;
+    double windTerm = Trollope.windTerm(p.fire().windSpeedMPerS());
+    for (int b = 0; b < s.blocks; b++) {
+      spread(p, s, b);
       if (plan.burnsIn(b, year)) {
-        plannedIntensity = plan.lateDrySeason[b]
-            ? intensity(fuel, moistureLate, DoubleVector.fromArray(SPECIES, f.humidityTermLate,
-                forcingAt), windTerm)
-            : intensity(fuel, moistureEarly, DoubleVector.fromArray(SPECIES,
-                f.humidityTermEarly, forcingAt), windTerm);
-        planned = spread.mul(plan.targetFractionBurnt[b])
-            .blend(zero, plannedIntensity.compare(VectorOperators.LE, 0));
+        plannedBurn(plan, f, year, s, b, windTerm);
+      } else {
+        java.util.Arrays.fill(s.plannedBurntFraction, b * LANES, (b + 1) * LANES, 0);
+        java.util.Arrays.fill(s.plannedIntensityKwPerM, b * LANES, (b + 1) * LANES, 0);
       }
-      double ignitions = fp.wildfireIgnitionsPer100Km2PerYear() * areaKm2[b] / 100;
-      DoubleVector rate = spread.mul(ignitions)
-          .mul(DoubleVector.fromArray(SPECIES, f.curedSeasonFactor, forcingAt));
-      // Fire.ignites, lane by lane: surely lit above one bound, surely not below the other,
-      // the exact test draw < 1 - exp(-rate) between them.
-      DoubleVector draw = DoubleVector.fromArray(SPECIES, f.ignitionDraw, forcingAt);
-      VectorMask<Double> exact = draw.compare(VectorOperators.LT,
-          one.sub(rate.neg().lanewise(VectorOperators.EXP)));
-      VectorMask<Double> lit = rate.compare(VectorOperators.GT,
-              DoubleVector.fromArray(SPECIES, f.ignitionLitAbove, forcingAt))
-          .or(rate.compare(VectorOperators.GE,
-              DoubleVector.fromArray(SPECIES, f.ignitionUnlitBelow, forcingAt)).and(exact));
-      DoubleVector wildIntensity = intensity(fuel, moistureLate,
-          DoubleVector.fromArray(SPECIES, f.humidityTermLate, forcingAt), windTerm);
-      VectorMask<Double> burns = lit.and(wildIntensity.compare(VectorOperators.GT, 0));
-      DoubleVector extent = DoubleVector.fromArray(SPECIES, f.extentDraw, forcingAt)
-          .mul(0.7).add(0.3);
-      DoubleVector wild = zero.blend(one.sub(planned).mul(spread).mul(extent), burns);
-      planned.intoArray(s.plannedBurntFraction, at);
-      plannedIntensity.intoArray(s.plannedIntensityKwPerM, at);
-      wild.intoArray(s.wildBurntFraction, at);
-      zero.blend(wildIntensity, wild.compare(VectorOperators.GT, 0))
-          .intoArray(s.wildIntensityKwPerM, at);
-      fuel.mul(one.sub(planned).sub(wild)).intoArray(s.leftoverGrassKgPerHa, at);
+      unplannedFire(p, f, year, s, b, windTerm);
     }
   }
 
-  /** {@link Trollope#fireIntensityOfTerms}, the same operations in the same order. */
-  private static DoubleVector intensity(DoubleVector fuel, DoubleVector moistureTerm,
-      DoubleVector humidityTerm, double windTerm) {
-    return fuel.mul(0.8684).add(2729).sub(moistureTerm).sub(humidityTerm).sub(windTerm).max(0);
+  /** Fire.spreadFactor of block b's fuel: 1 / (1 + exp(-(fuel - minimum) / scale)). */
+  private static void spread(ModelParameters p, LaneState s, int b) {
+    FireParameters fp = p.fire();
+    DoubleVector.broadcast(SPECIES, 1.0).div(DoubleVector.fromArray(SPECIES, s.fuelKgPerHa,
+            b * LANES).sub(fp.minimumFuelKgPerHa()).neg().div(fp.fuelSpreadScaleKgPerHa())
+            .lanewise(VectorOperators.EXP).add(1))
+        .intoArray(s.fireSpread, b * LANES);
+  }
+
+  /** The planned burn of block b: Trollope's intensity in the policy's season, share burnt. */
+  private static void plannedBurn(ManagementPlan plan, LaneForcing f, int year, LaneState s,
+      int b, double windTerm) {
+    int at = b * LANES;
+    int forcingAt = (year * s.blocks + b) * LANES;
+    boolean late = plan.lateDrySeason[b];
+    DoubleVector moisture = DoubleVector.fromArray(SPECIES,
+        late ? f.moistureTermLate : f.moistureTermEarly, 0);
+    DoubleVector humidity = DoubleVector.fromArray(SPECIES,
+        late ? f.humidityTermLate : f.humidityTermEarly, forcingAt);
+    // Trollope.fireIntensityOfTerms: max(0, 2729 + 0.8684 FL - moisture - humidity - wind).
+    DoubleVector intensity = DoubleVector.fromArray(SPECIES, s.fuelKgPerHa, at).mul(0.8684)
+        .add(2729).sub(moisture).sub(humidity).sub(windTerm).max(0);
+    intensity.intoArray(s.plannedIntensityKwPerM, at);
+    // A fire whose intensity is not positive does not carry.
+    DoubleVector.zero(SPECIES).blend(DoubleVector.fromArray(SPECIES, s.fireSpread, at)
+            .mul(plan.targetFractionBurnt[b]), intensity.compare(VectorOperators.GT, 0))
+        .intoArray(s.plannedBurntFraction, at);
+  }
+
+  /** Whether an unplanned fire is lit in block b, how much it burns, and what is left. */
+  private static void unplannedFire(ModelParameters p, LaneForcing f, int year, LaneState s,
+      int b, double windTerm) {
+    FireParameters fp = p.fire();
+    int at = b * LANES;
+    int forcingAt = (year * s.blocks + b) * LANES;
+    DoubleVector zero = DoubleVector.zero(SPECIES);
+    DoubleVector one = DoubleVector.broadcast(SPECIES, 1.0);
+    DoubleVector fuel = DoubleVector.fromArray(SPECIES, s.fuelKgPerHa, at);
+    DoubleVector spread = DoubleVector.fromArray(SPECIES, s.fireSpread, at);
+    DoubleVector planned = DoubleVector.fromArray(SPECIES, s.plannedBurntFraction, at);
+    double ignitions = fp.wildfireIgnitionsPer100Km2PerYear() * p.blocks().areaKm2[b] / 100;
+    DoubleVector rate = spread.mul(ignitions)
+        .mul(DoubleVector.fromArray(SPECIES, f.curedSeasonFactor, forcingAt));
+    // Fire.ignites: surely lit above one bound, surely not below the other, the exact test
+    // draw < 1 - exp(-rate) between them.
+    VectorMask<Double> exact = DoubleVector.fromArray(SPECIES, f.ignitionDraw, forcingAt)
+        .compare(VectorOperators.LT, one.sub(rate.neg().lanewise(VectorOperators.EXP)));
+    VectorMask<Double> lit = rate.compare(VectorOperators.GT,
+            DoubleVector.fromArray(SPECIES, f.ignitionLitAbove, forcingAt))
+        .or(rate.compare(VectorOperators.GE,
+            DoubleVector.fromArray(SPECIES, f.ignitionUnlitBelow, forcingAt)).and(exact));
+    DoubleVector intensity = fuel.mul(0.8684).add(2729)
+        .sub(DoubleVector.fromArray(SPECIES, f.moistureTermLate, 0))
+        .sub(DoubleVector.fromArray(SPECIES, f.humidityTermLate, forcingAt)).sub(windTerm)
+        .max(0);
+    DoubleVector extent = DoubleVector.fromArray(SPECIES, f.extentDraw, forcingAt)
+        .mul(0.7).add(0.3);
+    DoubleVector wild = zero.blend(one.sub(planned).mul(spread).mul(extent),
+        lit.and(intensity.compare(VectorOperators.GT, 0)));
+    wild.intoArray(s.wildBurntFraction, at);
+    zero.blend(intensity, wild.compare(VectorOperators.GT, 0))
+        .intoArray(s.wildIntensityKwPerM, at);
+    fuel.mul(one.sub(planned).sub(wild)).intoArray(s.leftoverGrassKgPerHa, at);
   }
 }

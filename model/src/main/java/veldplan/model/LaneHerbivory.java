@@ -17,233 +17,265 @@ import jdk.incubator.vector.VectorOperators;
  * {@link Herbivory#forageAndGraze} for every lane of a {@link LaneState} at once; see there for
  * the model. Reach, acceptance and the overlap weights depend on the policy only and are read
  * from {@link LaneState#shared}; forage, diets and depletion differ between lanes. Sums are taken
- * in the scalar code's order, so each lane gets the same numbers.
+ * in the scalar code's order, so each lane gets the same numbers. Small methods that pass arrays
+ * rather than vectors, as in {@link LaneTrees}; entry i of a lane array starts at i x LANES.
  */
 final class LaneHerbivory {
   private LaneHerbivory() {}
 
   static void forageAndGraze(ModelParameters p, LaneState s) {
-    browseAndTallGrass(p, s);
-    elephantDiet(p, s);
-    usableForage(p, s);
-    compete(p, s);
-    eat(s);
-  }
-
-  private static DoubleVector load(double[] a, int entry) {
-    return DoubleVector.fromArray(SPECIES, a, entry * LANES);
-  }
-
-  private static void store(DoubleVector v, double[] a, int entry) {
-    v.intoArray(a, entry * LANES);
-  }
-
-  static void browseAndTallGrass(ModelParameters p, LaneState s) {
-    TreeParameters t = p.trees();
-    GrassParameters gp = p.grass();
-    double grassUse = gp.properUseFraction();
-    DoubleVector zero = DoubleVector.zero(SPECIES);
     for (int b = 0; b < s.blocks; b++) {
-      DoubleVector low = zero;
-      DoubleVector high = zero;
-      int trees = b * TreeClass.COUNT;
-      for (int k = 0; k < TreeClass.COUNT; k++) {
-        DoubleVector leaf = load(s.treesPerHa, trees + k).mul(t.browseKgPerTreePerYear[k]);
-        low = low.add(leaf.mul(t.lowBrowseShare[k]));
-        high = high.add(leaf.mul(1 - t.lowBrowseShare[k]));
+      browseAndTallGrass(p, s, b);
+    }
+    elephantDiet(p, s);
+    for (int b = 0; b < s.blocks; b++) {
+      supply(p, s, b);
+    }
+    java.util.Arrays.fill(s.forageKg, 0);
+    for (int b = 0; b < s.blocks; b++) {
+      for (int h = 0; h < s.herbivores; h++) {
+        forage(s, h, b);
       }
-      store(low, s.lowBrowseKgPerHa, b);
-      store(high, s.highBrowseKgPerHa, b);
-      DoubleVector intensity = load(s.grazedFraction, b).div(grassUse).min(1);
-      store(intensity.mul(gp.grazingLawnEffect()).neg().add(1).mul(gp.tallGrassMaxShare()),
-          s.tallShare, b);
+    }
+    for (int h = 0; h < s.herbivores; h++) {
+      inverseForageAndDemand(p, s, h);
+    }
+    for (int pool = 0; pool < POOLS; pool++) {
+      for (int o = 0; o < s.herbivores; o++) {
+        depletion(s, pool, o);
+      }
+    }
+    java.util.Arrays.fill(s.grazedFraction, 0);
+    java.util.Arrays.fill(s.browsePressure, 0);
+    java.util.Arrays.fill(s.pressureKg, 0);
+    for (int h = 0; h < s.herbivores; h++) {
+      for (int b = 0; b < s.blocks; b++) {
+        share(s, h, b);
+      }
+      DoubleVector.fromArray(SPECIES, s.pressureKg, h * LANES)
+          .mul(DoubleVector.fromArray(SPECIES, s.forageKg, h * LANES))
+          .intoArray(s.pressureKg, h * LANES);
+    }
+    for (int b = 0; b < s.blocks; b++) {
+      elephantUseAndPerHa(p, s, b);
+      eat(s, b);
     }
   }
 
-  static void elephantDiet(ModelParameters p, LaneState s) {
-    BlockParameters bp = p.blocks();
+  /** Browse below and above 2 m, and this year's tall-grass share, of block b. */
+  private static void browseAndTallGrass(ModelParameters p, LaneState s, int b) {
+    TreeParameters t = p.trees();
+    GrassParameters gp = p.grass();
+    DoubleVector low = DoubleVector.zero(SPECIES);
+    DoubleVector high = DoubleVector.zero(SPECIES);
+    int trees = b * TreeClass.COUNT;
+    for (int k = 0; k < TreeClass.COUNT; k++) {
+      DoubleVector leaf = DoubleVector.fromArray(SPECIES, s.treesPerHa, (trees + k) * LANES)
+          .mul(t.browseKgPerTreePerYear[k]);
+      low = low.add(leaf.mul(t.lowBrowseShare[k]));
+      high = high.add(leaf.mul(1 - t.lowBrowseShare[k]));
+    }
+    low.intoArray(s.lowBrowseKgPerHa, b * LANES);
+    high.intoArray(s.highBrowseKgPerHa, b * LANES);
+    DoubleVector intensity = DoubleVector.fromArray(SPECIES, s.grazedFraction, b * LANES)
+        .div(gp.properUseFraction()).min(1);
+    // tallMax x (1 - lawn x intensity); 1 - x is (-x) + 1 exactly.
+    intensity.mul(gp.grazingLawnEffect()).neg().add(1).mul(gp.tallGrassMaxShare())
+        .intoArray(s.tallShare, b * LANES);
+  }
+
+  /** Share of grass in each herbivore's diet; elephants choose by what they find. */
+  private static void elephantDiet(ModelParameters p, LaneState s) {
     HerbivoreParameters hp = p.herbivores();
-    int blocks = s.blocks;
+    int e = hp.elephant;
+    double[] sums = s.dietSums;
+    java.util.Arrays.fill(sums, 0);
+    for (int b = 0; b < s.blocks; b++) {
+      elephantReach(p, s, b);
+    }
+    DoubleVector grassReach = DoubleVector.fromArray(SPECIES, sums, 0);
+    DoubleVector weighted = grassReach.add(DoubleVector.fromArray(SPECIES, sums, LANES)
+        .mul(p.elephants().browsePreference()));
+    DoubleVector.broadcast(SPECIES, hp.grassDietFraction[e])
+        .blend(grassReach.div(weighted), weighted.compare(VectorOperators.GT, 0))
+        .intoArray(s.grassDiet, e * LANES);
+    for (int h = 0; h < hp.count; h++) {
+      if (h != e) {
+        java.util.Arrays.fill(s.grassDiet, h * LANES, (h + 1) * LANES,
+            hp.grassDietFraction[h]);
+      }
+    }
+  }
+
+  /** Adds block b's grass and browse within the elephants' reach to s.dietSums. */
+  private static void elephantReach(ModelParameters p, LaneState s, int b) {
+    HerbivoreParameters hp = p.herbivores();
     double[] accept = hp.acceptance;
     int e = hp.elephant;
     int ea = e * CATEGORIES_PER_BLOCK;
-    double grassUse = p.grass().properUseFraction();
-    double browseUse = p.grass().browseUseFraction();
-    DoubleVector grassReach = DoubleVector.zero(SPECIES);
-    DoubleVector browseReach = DoubleVector.zero(SPECIES);
-    for (int b = 0; b < blocks; b++) {
-      double area = bp.areaHa[b] * s.shared.reach[e * blocks + b];
-      DoubleVector tall = load(s.tallShare, b);
-      DoubleVector mix = tall.mul(accept[ea + TALL])
-          .add(tall.neg().add(1).mul(accept[ea + SHORT]));
-      grassReach = grassReach.add(load(s.grassProductionKgPerHa, b).mul(area * grassUse)
-          .mul(mix));
-      browseReach = browseReach.add(load(s.lowBrowseKgPerHa, b).mul(accept[ea + LOW_BROWSE])
-          .add(load(s.highBrowseKgPerHa, b).mul(accept[ea + HIGH_BROWSE]))
-          .mul(area * browseUse));
-    }
-    DoubleVector weighted = grassReach.add(browseReach.mul(p.elephants().browsePreference()));
-    store(DoubleVector.broadcast(SPECIES, hp.grassDietFraction[e]).blend(
-        grassReach.div(weighted), weighted.compare(VectorOperators.GT, 0)), s.grassDiet, e);
-    for (int h = 0; h < hp.count; h++) {
-      if (h != e) {
-        store(DoubleVector.broadcast(SPECIES, hp.grassDietFraction[h]), s.grassDiet, h);
-      }
-    }
+    double area = p.blocks().areaHa[b] * s.shared.reach[e * s.blocks + b];
+    int at = b * LANES;
+    DoubleVector tall = DoubleVector.fromArray(SPECIES, s.tallShare, at);
+    DoubleVector mix = tall.mul(accept[ea + TALL])
+        .add(tall.neg().add(1).mul(accept[ea + SHORT]));
+    DoubleVector.fromArray(SPECIES, s.dietSums, 0)
+        .add(DoubleVector.fromArray(SPECIES, s.grassProductionKgPerHa, at)
+            .mul(area * p.grass().properUseFraction()).mul(mix))
+        .intoArray(s.dietSums, 0);
+    DoubleVector.fromArray(SPECIES, s.dietSums, LANES)
+        .add(DoubleVector.fromArray(SPECIES, s.lowBrowseKgPerHa, at).mul(accept[ea + LOW_BROWSE])
+            .add(DoubleVector.fromArray(SPECIES, s.highBrowseKgPerHa, at)
+                .mul(accept[ea + HIGH_BROWSE]))
+            .mul(area * p.grass().browseUseFraction()))
+        .intoArray(s.dietSums, LANES);
   }
 
-  static void usableForage(ModelParameters p, LaneState s) {
-    GrassParameters gp = p.grass();
-    double grassUse = gp.properUseFraction();
-    double browseUse = gp.browseUseFraction();
+  /** Usable supply of the four categories of block b. */
+  private static void supply(ModelParameters p, LaneState s, int b) {
     BlockParameters bp = p.blocks();
-    int blocks = s.blocks;
-    int herbivores = s.herbivores;
+    GrassParameters gp = p.grass();
     double[] supply = s.categorySupplyKg;
-    for (int b = 0; b < blocks; b++) {
-      int at = CATEGORIES_PER_BLOCK * b;
-      DoubleVector grass = load(s.grassProductionKgPerHa, b).mul(bp.areaHa[b] * grassUse);
-      DoubleVector tall = load(s.tallShare, b);
-      store(grass.mul(tall), supply, at + TALL);
-      store(grass.mul(tall.neg().add(1)), supply, at + SHORT);
-      store(load(s.lowBrowseKgPerHa, b).mul(bp.areaHa[b] * browseUse), supply,
-          at + LOW_BROWSE);
-      store(load(s.highBrowseKgPerHa, b).mul(bp.areaHa[b] * browseUse), supply,
-          at + HIGH_BROWSE);
-    }
-    double[] grassForage = s.categoryForageKg[0];
-    double[] browseForage = s.categoryForageKg[1];
+    int at = CATEGORIES_PER_BLOCK * b;
+    DoubleVector grass = DoubleVector.fromArray(SPECIES, s.grassProductionKgPerHa, b * LANES)
+        .mul(bp.areaHa[b] * gp.properUseFraction());
+    DoubleVector tall = DoubleVector.fromArray(SPECIES, s.tallShare, b * LANES);
+    grass.mul(tall).intoArray(supply, (at + TALL) * LANES);
+    grass.mul(tall.neg().add(1)).intoArray(supply, (at + SHORT) * LANES);
+    double browseArea = bp.areaHa[b] * gp.browseUseFraction();
+    DoubleVector.fromArray(SPECIES, s.lowBrowseKgPerHa, b * LANES).mul(browseArea)
+        .intoArray(supply, (at + LOW_BROWSE) * LANES);
+    DoubleVector.fromArray(SPECIES, s.highBrowseKgPerHa, b * LANES).mul(browseArea)
+        .intoArray(supply, (at + HIGH_BROWSE) * LANES);
+  }
+
+  /** What herbivore h can use in block b, by category, added to its forage. */
+  private static void forage(LaneState s, int h, int b) {
+    double[] supply = s.categorySupplyKg;
+    int at = CATEGORIES_PER_BLOCK * b;
+    int j = (h * s.blocks + b) * KINDS_PER_POOL;
     double[] grassWeight = s.shared.usableWeight[0];
     double[] browseWeight = s.shared.usableWeight[1];
+    DoubleVector grassShare = DoubleVector.fromArray(SPECIES, s.grassDiet, h * LANES);
+    DoubleVector browseShare = grassShare.neg().add(1);
+    DoubleVector tall = grassShare.mul(grassWeight[j])
+        .mul(DoubleVector.fromArray(SPECIES, supply, (at + TALL) * LANES));
+    DoubleVector short_ = grassShare.mul(grassWeight[j + 1])
+        .mul(DoubleVector.fromArray(SPECIES, supply, (at + SHORT) * LANES));
+    DoubleVector low = browseShare.mul(browseWeight[j])
+        .mul(DoubleVector.fromArray(SPECIES, supply, (at + LOW_BROWSE) * LANES));
+    DoubleVector high = browseShare.mul(browseWeight[j + 1])
+        .mul(DoubleVector.fromArray(SPECIES, supply, (at + HIGH_BROWSE) * LANES));
+    tall.intoArray(s.categoryForageKg[0], j * LANES);
+    short_.intoArray(s.categoryForageKg[0], (j + 1) * LANES);
+    low.intoArray(s.categoryForageKg[1], j * LANES);
+    high.intoArray(s.categoryForageKg[1], (j + 1) * LANES);
+    DoubleVector.fromArray(SPECIES, s.forageKg, h * LANES).add(tall).add(short_).add(low)
+        .add(high).intoArray(s.forageKg, h * LANES);
+  }
+
+  /** 1 / forage (1 without forage), demand, and demand per unit of usable supply of h. */
+  private static void inverseForageAndDemand(ModelParameters p, LaneState s, int h) {
     DoubleVector zero = DoubleVector.zero(SPECIES);
-    for (int h = 0; h < herbivores; h++) {
-      store(zero, s.forageKg, h);
-    }
-    for (int b = 0; b < blocks; b++) {
-      int at = CATEGORIES_PER_BLOCK * b;
-      DoubleVector tallSupply = load(supply, at + TALL);
-      DoubleVector shortSupply = load(supply, at + SHORT);
-      DoubleVector lowSupply = load(supply, at + LOW_BROWSE);
-      DoubleVector highSupply = load(supply, at + HIGH_BROWSE);
-      for (int h = 0; h < herbivores; h++) {
-        DoubleVector grassShare = load(s.grassDiet, h);
-        DoubleVector browseShare = grassShare.neg().add(1);
-        int j = (h * blocks + b) * KINDS_PER_POOL;
-        DoubleVector tall = grassShare.mul(grassWeight[j]).mul(tallSupply);
-        DoubleVector short_ = grassShare.mul(grassWeight[j + 1]).mul(shortSupply);
-        DoubleVector low = browseShare.mul(browseWeight[j]).mul(lowSupply);
-        DoubleVector high = browseShare.mul(browseWeight[j + 1]).mul(highSupply);
-        store(tall, grassForage, j);
-        store(short_, grassForage, j + 1);
-        store(low, browseForage, j);
-        store(high, browseForage, j + 1);
-        store(load(s.forageKg, h).add(tall).add(short_).add(low).add(high), s.forageKg, h);
-      }
-    }
     DoubleVector one = DoubleVector.broadcast(SPECIES, 1.0);
-    for (int h = 0; h < herbivores; h++) {
-      DoubleVector total = load(s.forageKg, h);
-      store(one.blend(one.div(total), total.compare(VectorOperators.GT, 0)),
-          s.inverseForage, h);
+    DoubleVector forage = DoubleVector.fromArray(SPECIES, s.forageKg, h * LANES);
+    one.blend(one.div(forage), forage.compare(VectorOperators.GT, 0))
+        .intoArray(s.inverseForage, h * LANES);
+    DoubleVector demand = DoubleVector.fromArray(SPECIES, s.abundance, h * LANES)
+        .mul(p.herbivores().sharedIntakeKgPerYear[h]);
+    demand.intoArray(s.sharedDemandKg, h * LANES);
+    DoubleVector perForage = zero.blend(demand.div(forage),
+        forage.compare(VectorOperators.GT, 0));
+    DoubleVector diet = DoubleVector.fromArray(SPECIES, s.grassDiet, h * LANES);
+    perForage.mul(diet).intoArray(s.demandPerUnitSupply, h * POOLS * LANES);
+    perForage.mul(one.sub(diet)).intoArray(s.demandPerUnitSupply, (h * POOLS + 1) * LANES);
+  }
+
+  /** Adds herbivore o's demand on every category of one pool to the depletion others meet. */
+  private static void depletion(LaneState s, int pool, int o) {
+    double[] depletion = s.depletion[pool];
+    double[] w = s.shared.overlap[o * POOLS + pool];
+    int span = s.herbivores * s.blocks * KINDS_PER_POOL;
+    DoubleVector q = DoubleVector.fromArray(SPECIES, s.demandPerUnitSupply,
+        (o * POOLS + pool) * LANES);
+    if (o == 0) {
+      for (int j = 0; j < span; j++) {
+        q.mul(w[j]).intoArray(depletion, j * LANES);
+      }
+    } else {
+      for (int j = 0; j < span; j++) {
+        DoubleVector.fromArray(SPECIES, depletion, j * LANES).add(q.mul(w[j]))
+            .intoArray(depletion, j * LANES);
+      }
     }
   }
 
-  static void compete(ModelParameters p, LaneState s) {
+  /**
+   * Herbivore h in block b: its food-weighted depletion (added to pressureKg, multiplied by the
+   * forage afterwards) and what it eats (added to the block's grazed and browsed kg).
+   */
+  private static void share(LaneState s, int h, int b) {
+    int j = (h * s.blocks + b) * KINDS_PER_POOL;
+    DoubleVector inverse = DoubleVector.fromArray(SPECIES, s.inverseForage, h * LANES);
+    DoubleVector demand = DoubleVector.fromArray(SPECIES, s.sharedDemandKg, h * LANES);
+    DoubleVector tall = DoubleVector.fromArray(SPECIES, s.categoryForageKg[0], j * LANES)
+        .mul(inverse);
+    DoubleVector short_ = DoubleVector.fromArray(SPECIES, s.categoryForageKg[0],
+        (j + 1) * LANES).mul(inverse);
+    DoubleVector low = DoubleVector.fromArray(SPECIES, s.categoryForageKg[1], j * LANES)
+        .mul(inverse);
+    DoubleVector high = DoubleVector.fromArray(SPECIES, s.categoryForageKg[1],
+        (j + 1) * LANES).mul(inverse);
+    DoubleVector dTall = DoubleVector.fromArray(SPECIES, s.depletion[0], j * LANES);
+    DoubleVector dShort = DoubleVector.fromArray(SPECIES, s.depletion[0], (j + 1) * LANES);
+    DoubleVector dLow = DoubleVector.fromArray(SPECIES, s.depletion[1], j * LANES);
+    DoubleVector dHigh = DoubleVector.fromArray(SPECIES, s.depletion[1], (j + 1) * LANES);
+    DoubleVector.fromArray(SPECIES, s.pressureKg, h * LANES).add(tall.mul(dTall))
+        .add(short_.mul(dShort)).add(low.mul(dLow)).add(high.mul(dHigh))
+        .intoArray(s.pressureKg, h * LANES);
+    // The share of demand met in a category: share / depletion where it is over-used.
+    DoubleVector metTall = tall.blend(tall.div(dTall), dTall.compare(VectorOperators.GT, 1));
+    DoubleVector metShort = short_.blend(short_.div(dShort),
+        dShort.compare(VectorOperators.GT, 1));
+    DoubleVector metLow = low.blend(low.div(dLow), dLow.compare(VectorOperators.GT, 1));
+    DoubleVector.fromArray(SPECIES, s.grazedFraction, b * LANES).add(demand.mul(metTall))
+        .add(demand.mul(metShort)).intoArray(s.grazedFraction, b * LANES);
+    DoubleVector.fromArray(SPECIES, s.browsePressure, b * LANES).add(demand.mul(metLow))
+        .intoArray(s.browsePressure, b * LANES);
+  }
+
+  /** The elephants' use of block b, and the eaten kg per ha (still kg: see eat). */
+  private static void elephantUseAndPerHa(ModelParameters p, LaneState s, int b) {
     BlockParameters bp = p.blocks();
-    HerbivoreParameters hp = p.herbivores();
-    int e = hp.elephant;
-    int blocks = s.blocks;
-    int herbivores = s.herbivores;
-    int span = herbivores * blocks * KINDS_PER_POOL;
-    DoubleVector zero = DoubleVector.zero(SPECIES);
-    DoubleVector one = DoubleVector.broadcast(SPECIES, 1.0);
-    for (int o = 0; o < herbivores; o++) {
-      DoubleVector demand = load(s.abundance, o).mul(hp.sharedIntakeKgPerYear[o]);
-      store(demand, s.sharedDemandKg, o);
-      DoubleVector forage = load(s.forageKg, o);
-      DoubleVector perForage = zero.blend(demand.div(forage),
-          forage.compare(VectorOperators.GT, 0));
-      DoubleVector diet = load(s.grassDiet, o);
-      store(perForage.mul(diet), s.demandPerUnitSupply, o * POOLS);
-      store(perForage.mul(one.sub(diet)), s.demandPerUnitSupply, o * POOLS + 1);
-    }
-    // depletion = q0 w0 + q1 w1 + ..., added left to right as in Herbivory.compete.
-    for (int pool = 0; pool < POOLS; pool++) {
-      double[] depletion = s.depletion[pool];
-      for (int o = 0; o < herbivores; o++) {
-        DoubleVector q = load(s.demandPerUnitSupply, o * POOLS + pool);
-        double[] w = s.shared.overlap[o * POOLS + pool];
-        for (int j = 0; j < span; j++) {
-          DoubleVector term = q.mul(w[j]);
-          store(o == 0 ? term : load(depletion, j).add(term), depletion, j);
-        }
-      }
-    }
-    double[] grassForage = s.categoryForageKg[0];
-    double[] browseForage = s.categoryForageKg[1];
-    double[] grassDepletion = s.depletion[0];
-    double[] browseDepletion = s.depletion[1];
-    double[] grazedKg = s.grazedFraction;
-    double[] browsedKg = s.browsePressure;
-    for (int b = 0; b < blocks; b++) {
-      store(zero, grazedKg, b);
-      store(zero, browsedKg, b);
-    }
-    for (int h = 0; h < herbivores; h++) {
-      DoubleVector demand = load(s.sharedDemandKg, h);
-      DoubleVector inverse = load(s.inverseForage, h);
-      DoubleVector pressure = zero;
-      for (int b = 0; b < blocks; b++) {
-        int j = (h * blocks + b) * KINDS_PER_POOL;
-        DoubleVector tall = load(grassForage, j).mul(inverse);
-        DoubleVector short_ = load(grassForage, j + 1).mul(inverse);
-        DoubleVector low = load(browseForage, j).mul(inverse);
-        DoubleVector high = load(browseForage, j + 1).mul(inverse);
-        DoubleVector dTall = load(grassDepletion, j);
-        DoubleVector dShort = load(grassDepletion, j + 1);
-        DoubleVector dLow = load(browseDepletion, j);
-        DoubleVector dHigh = load(browseDepletion, j + 1);
-        pressure = pressure.add(tall.mul(dTall)).add(short_.mul(dShort)).add(low.mul(dLow))
-            .add(high.mul(dHigh));
-        DoubleVector grazed = load(grazedKg, b)
-            .add(demand.mul(metShare(tall, dTall)))
-            .add(demand.mul(metShare(short_, dShort)));
-        store(grazed, grazedKg, b);
-        store(load(browsedKg, b).add(demand.mul(metShare(low, dLow))), browsedKg, b);
-      }
-      store(pressure.mul(load(s.forageKg, h)), s.pressureKg, h);
-    }
-    DoubleVector inverse = load(s.inverseForage, e);
-    DoubleVector elephants = load(s.abundance, e);
-    for (int b = 0; b < blocks; b++) {
-      int j = (e * blocks + b) * KINDS_PER_POOL;
-      DoubleVector used = zero.add(load(grassForage, j).mul(inverse))
-          .add(load(grassForage, j + 1).mul(inverse))
-          .add(load(browseForage, j).mul(inverse))
-          .add(load(browseForage, j + 1).mul(inverse));
-      store(load(grazedKg, b).div(bp.areaHa[b]), grazedKg, b);
-      store(load(browsedKg, b).div(bp.areaHa[b]), browsedKg, b);
-      store(used.mul(elephants.div(bp.areaKm2[b])), s.elephantsPerKm2, b);
-    }
+    int e = p.herbivores().elephant;
+    int j = (e * s.blocks + b) * KINDS_PER_POOL;
+    DoubleVector inverse = DoubleVector.fromArray(SPECIES, s.inverseForage, e * LANES);
+    DoubleVector used = DoubleVector.zero(SPECIES)
+        .add(DoubleVector.fromArray(SPECIES, s.categoryForageKg[0], j * LANES).mul(inverse))
+        .add(DoubleVector.fromArray(SPECIES, s.categoryForageKg[0], (j + 1) * LANES)
+            .mul(inverse))
+        .add(DoubleVector.fromArray(SPECIES, s.categoryForageKg[1], j * LANES).mul(inverse))
+        .add(DoubleVector.fromArray(SPECIES, s.categoryForageKg[1], (j + 1) * LANES)
+            .mul(inverse));
+    DoubleVector.fromArray(SPECIES, s.grazedFraction, b * LANES).div(bp.areaHa[b])
+        .intoArray(s.grazedFraction, b * LANES);
+    DoubleVector.fromArray(SPECIES, s.browsePressure, b * LANES).div(bp.areaHa[b])
+        .intoArray(s.browsePressure, b * LANES);
+    used.mul(DoubleVector.fromArray(SPECIES, s.abundance, e * LANES).div(bp.areaKm2[b]))
+        .intoArray(s.elephantsPerKm2, b * LANES);
   }
 
-  /** The share of demand met in a category: share / depletion where it is over-used. */
-  private static DoubleVector metShare(DoubleVector share, DoubleVector depletion) {
-    return share.blend(share.div(depletion), depletion.compare(VectorOperators.GT, 1));
-  }
-
-  static void eat(LaneState s) {
+  /** Grazing takes grass from the fuel; the grazed and browsed shares of block b. */
+  private static void eat(LaneState s, int b) {
+    int at = b * LANES;
     DoubleVector zero = DoubleVector.zero(SPECIES);
-    for (int b = 0; b < s.blocks; b++) {
-      DoubleVector fuel = load(s.fuelKgPerHa, b);
-      DoubleVector eaten = load(s.grazedFraction, b).min(fuel);
-      store(fuel.sub(eaten), s.fuelKgPerHa, b);
-      DoubleVector production = load(s.grassProductionKgPerHa, b);
-      store(zero.blend(eaten.div(production).min(1), production.compare(VectorOperators.GT, 0)),
-          s.grazedFraction, b);
-      DoubleVector available = load(s.lowBrowseKgPerHa, b);
-      store(zero.blend(load(s.browsePressure, b).div(available).min(1),
-          available.compare(VectorOperators.GT, 0)), s.browsePressure, b);
-    }
+    DoubleVector fuel = DoubleVector.fromArray(SPECIES, s.fuelKgPerHa, at);
+    DoubleVector eaten = DoubleVector.fromArray(SPECIES, s.grazedFraction, at).min(fuel);
+    fuel.sub(eaten).intoArray(s.fuelKgPerHa, at);
+    DoubleVector production = DoubleVector.fromArray(SPECIES, s.grassProductionKgPerHa, at);
+    zero.blend(eaten.div(production).min(1), production.compare(VectorOperators.GT, 0))
+        .intoArray(s.grazedFraction, at);
+    DoubleVector available = DoubleVector.fromArray(SPECIES, s.lowBrowseKgPerHa, at);
+    zero.blend(DoubleVector.fromArray(SPECIES, s.browsePressure, at).div(available).min(1),
+        available.compare(VectorOperators.GT, 0)).intoArray(s.browsePressure, at);
   }
 }

@@ -43,10 +43,8 @@ public final class LaneSimulator {
     }
     ModelParameters p = params;
     state.reset(p);
-    EcosystemState view = state.view;
     for (int r = 0; r < LANES; r++) {
-      state.unpack(r, view);
-      out[r].recordStart(view);
+      out[r].recordStart(state, r);
     }
     for (int year = 0; year < p.years(); year++) {
       state.shared.year = year;
@@ -60,10 +58,10 @@ public final class LaneSimulator {
       LaneManagement.endOfYear(p, plan, year, state);
       double discount = scalar.discountFactor(year);
       for (int r = 0; r < LANES; r++) {
-        state.unpack(r, view);
-        out[r].record(year, view, forcing.replicates[r], discount);
+        out[r].record(year, state, r, forcing.replicates[r], discount);
       }
     }
+    EcosystemState view = state.view;
     for (int r = 0; r < LANES; r++) {
       state.unpack(r, view);
       if (view.violation() != null) {

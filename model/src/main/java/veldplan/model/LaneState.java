@@ -67,12 +67,19 @@ final class LaneState {
 
   // ---- scratch, lane-innermost
   final double[] nextClasses = new double[TreeClass.COUNT * LANES];
+  final double[] treeTerms = new double[LaneTrees.TERMS * LANES];
+  /** Fire.spreadFactor of each block's fuel this year. */
+  final double[] fireSpread;
+  /** The elephants' grass and browse within reach, summed over blocks. */
+  final double[] dietSums = new double[2 * LANES];
   final double[][] categoryForageKg;
   final double[] inverseForage;
   final double[] sharedDemandKg;
   final double[] demandPerUnitSupply;
   final double[][] depletion;
 
+  /** What a trajectory records, lane by lane (stride LANES). */
+  final RecordedState recorded;
   /** The lane arrays, in the order of {@link #scalarArrays}. */
   private final double[][] lanes;
 
@@ -108,12 +115,17 @@ final class LaneState {
     preyKg = lanes(herbivores);
     preyBiomassKg = lanes(predators);
     tallShare = lanes(blocks);
+    fireSpread = lanes(blocks);
     int pooled = herbivores * blocks * Herbivory.KINDS_PER_POOL;
     categoryForageKg = new double[][] {lanes(pooled), lanes(pooled)};
     inverseForage = lanes(herbivores);
     sharedDemandKg = lanes(herbivores);
     demandPerUnitSupply = lanes(herbivores * Herbivory.POOLS);
     depletion = new double[][] {lanes(pooled), lanes(pooled)};
+    recorded = new RecordedState(LANES, grassProductionKgPerHa, fuelKgPerHa,
+        plannedBurntFraction, wildBurntFraction, plannedIntensityKwPerM, wildIntensityKwPerM,
+        basalAreaM2PerHa, treesPerHa, browsePressure, elephantsPerKm2, abundance,
+        predatorAbundance);
     lanes = new double[][] {treesPerHa, leftoverGrassKgPerHa, abundance, predatorAbundance,
         coverageHistory, grazedFraction, basalAreaM2PerHa, grassProductionKgPerHa, fuelKgPerHa,
         lowBrowseKgPerHa, highBrowseKgPerHa, browsePressure, plannedBurntFraction,
