@@ -33,28 +33,24 @@ final class LaneHerbivory {
     }
     java.util.Arrays.fill(s.forageKg, 0);
     for (int b = 0; b < s.blocks; b++) {
-      for (int h = 0; h < s.herbivores; h++) {
-        forage(s, h, b);
-      }
+      forage(s, b);
     }
     for (int h = 0; h < s.herbivores; h++) {
       inverseForageAndDemand(p, s, h);
     }
     for (int pool = 0; pool < POOLS; pool++) {
-      for (int o = 0; o < s.herbivores; o++) {
+      int o = 0;
+      for (; o + 3 <= s.herbivores; o += 3) {
+        depletionOfThree(s, pool, o);
+      }
+      for (; o < s.herbivores; o++) {
         depletion(s, pool, o);
       }
     }
     java.util.Arrays.fill(s.grazedFraction, 0);
     java.util.Arrays.fill(s.browsePressure, 0);
-    java.util.Arrays.fill(s.pressureKg, 0);
     for (int h = 0; h < s.herbivores; h++) {
-      for (int b = 0; b < s.blocks; b++) {
-        share(s, h, b);
-      }
-      DoubleVector.fromArray(SPECIES, s.pressureKg, h * LANES)
-          .mul(DoubleVector.fromArray(SPECIES, s.forageKg, h * LANES))
-          .intoArray(s.pressureKg, h * LANES);
+      share(s, h);
     }
     for (int b = 0; b < s.blocks; b++) {
       elephantUseAndPerHa(p, s, b);
@@ -148,29 +144,32 @@ final class LaneHerbivory {
         .intoArray(supply, (at + HIGH_BROWSE) * LANES);
   }
 
-  /** What herbivore h can use in block b, by category, added to its forage. */
-  private static void forage(LaneState s, int h, int b) {
+  /** What each herbivore can use in block b, by category, added to its forage. */
+  private static void forage(LaneState s, int b) {
     double[] supply = s.categorySupplyKg;
     int at = CATEGORIES_PER_BLOCK * b;
-    int j = (h * s.blocks + b) * KINDS_PER_POOL;
     double[] grassWeight = s.shared.usableWeight[0];
     double[] browseWeight = s.shared.usableWeight[1];
-    DoubleVector grassShare = DoubleVector.fromArray(SPECIES, s.grassDiet, h * LANES);
-    DoubleVector browseShare = grassShare.neg().add(1);
-    DoubleVector tall = grassShare.mul(grassWeight[j])
-        .mul(DoubleVector.fromArray(SPECIES, supply, (at + TALL) * LANES));
-    DoubleVector short_ = grassShare.mul(grassWeight[j + 1])
-        .mul(DoubleVector.fromArray(SPECIES, supply, (at + SHORT) * LANES));
-    DoubleVector low = browseShare.mul(browseWeight[j])
-        .mul(DoubleVector.fromArray(SPECIES, supply, (at + LOW_BROWSE) * LANES));
-    DoubleVector high = browseShare.mul(browseWeight[j + 1])
-        .mul(DoubleVector.fromArray(SPECIES, supply, (at + HIGH_BROWSE) * LANES));
-    tall.intoArray(s.categoryForageKg[0], j * LANES);
-    short_.intoArray(s.categoryForageKg[0], (j + 1) * LANES);
-    low.intoArray(s.categoryForageKg[1], j * LANES);
-    high.intoArray(s.categoryForageKg[1], (j + 1) * LANES);
-    DoubleVector.fromArray(SPECIES, s.forageKg, h * LANES).add(tall).add(short_).add(low)
-        .add(high).intoArray(s.forageKg, h * LANES);
+    DoubleVector tallSupply = DoubleVector.fromArray(SPECIES, supply, (at + TALL) * LANES);
+    DoubleVector shortSupply = DoubleVector.fromArray(SPECIES, supply, (at + SHORT) * LANES);
+    DoubleVector lowSupply = DoubleVector.fromArray(SPECIES, supply, (at + LOW_BROWSE) * LANES);
+    DoubleVector highSupply = DoubleVector.fromArray(SPECIES, supply,
+        (at + HIGH_BROWSE) * LANES);
+    for (int h = 0; h < s.herbivores; h++) {
+      int j = (h * s.blocks + b) * KINDS_PER_POOL;
+      DoubleVector grassShare = DoubleVector.fromArray(SPECIES, s.grassDiet, h * LANES);
+      DoubleVector browseShare = grassShare.neg().add(1);
+      DoubleVector tall = grassShare.mul(grassWeight[j]).mul(tallSupply);
+      DoubleVector short_ = grassShare.mul(grassWeight[j + 1]).mul(shortSupply);
+      DoubleVector low = browseShare.mul(browseWeight[j]).mul(lowSupply);
+      DoubleVector high = browseShare.mul(browseWeight[j + 1]).mul(highSupply);
+      tall.intoArray(s.categoryForageKg[0], j * LANES);
+      short_.intoArray(s.categoryForageKg[0], (j + 1) * LANES);
+      low.intoArray(s.categoryForageKg[1], j * LANES);
+      high.intoArray(s.categoryForageKg[1], (j + 1) * LANES);
+      DoubleVector.fromArray(SPECIES, s.forageKg, h * LANES).add(tall).add(short_).add(low)
+          .add(high).intoArray(s.forageKg, h * LANES);
+    }
   }
 
   /** 1 / forage (1 without forage), demand, and demand per unit of usable supply of h. */
@@ -188,6 +187,35 @@ final class LaneHerbivory {
     DoubleVector diet = DoubleVector.fromArray(SPECIES, s.grassDiet, h * LANES);
     perForage.mul(diet).intoArray(s.demandPerUnitSupply, h * POOLS * LANES);
     perForage.mul(one.sub(diet)).intoArray(s.demandPerUnitSupply, (h * POOLS + 1) * LANES);
+  }
+
+  /**
+   * Adds the demand of herbivores o, o + 1 and o + 2 on every category of one pool to the
+   * depletion others meet: (d + q0 w0) + q1 w1 + q2 w2 in that order, as the scalar code adds
+   * them (d absent for o = 0), in one pass over the categories.
+   */
+  private static void depletionOfThree(LaneState s, int pool, int o) {
+    double[] depletion = s.depletion[pool];
+    double[] w0 = s.shared.overlap[o * POOLS + pool];
+    double[] w1 = s.shared.overlap[(o + 1) * POOLS + pool];
+    double[] w2 = s.shared.overlap[(o + 2) * POOLS + pool];
+    int span = s.herbivores * s.blocks * KINDS_PER_POOL;
+    DoubleVector q0 = DoubleVector.fromArray(SPECIES, s.demandPerUnitSupply,
+        (o * POOLS + pool) * LANES);
+    DoubleVector q1 = DoubleVector.fromArray(SPECIES, s.demandPerUnitSupply,
+        ((o + 1) * POOLS + pool) * LANES);
+    DoubleVector q2 = DoubleVector.fromArray(SPECIES, s.demandPerUnitSupply,
+        ((o + 2) * POOLS + pool) * LANES);
+    if (o == 0) {
+      for (int j = 0; j < span; j++) {
+        q0.mul(w0[j]).add(q1.mul(w1[j])).add(q2.mul(w2[j])).intoArray(depletion, j * LANES);
+      }
+    } else {
+      for (int j = 0; j < span; j++) {
+        DoubleVector.fromArray(SPECIES, depletion, j * LANES).add(q0.mul(w0[j]))
+            .add(q1.mul(w1[j])).add(q2.mul(w2[j])).intoArray(depletion, j * LANES);
+      }
+    }
   }
 
   /** Adds herbivore o's demand on every category of one pool to the depletion others meet. */
@@ -210,37 +238,41 @@ final class LaneHerbivory {
   }
 
   /**
-   * Herbivore h in block b: its food-weighted depletion (added to pressureKg, multiplied by the
-   * forage afterwards) and what it eats (added to the block's grazed and browsed kg).
+   * Herbivore h, block by block: its food-weighted depletion (pressureKg, times its forage at
+   * the end) and what it eats (added to each block's grazed and browsed kg).
    */
-  private static void share(LaneState s, int h, int b) {
-    int j = (h * s.blocks + b) * KINDS_PER_POOL;
+  private static void share(LaneState s, int h) {
     DoubleVector inverse = DoubleVector.fromArray(SPECIES, s.inverseForage, h * LANES);
     DoubleVector demand = DoubleVector.fromArray(SPECIES, s.sharedDemandKg, h * LANES);
-    DoubleVector tall = DoubleVector.fromArray(SPECIES, s.categoryForageKg[0], j * LANES)
-        .mul(inverse);
-    DoubleVector short_ = DoubleVector.fromArray(SPECIES, s.categoryForageKg[0],
-        (j + 1) * LANES).mul(inverse);
-    DoubleVector low = DoubleVector.fromArray(SPECIES, s.categoryForageKg[1], j * LANES)
-        .mul(inverse);
-    DoubleVector high = DoubleVector.fromArray(SPECIES, s.categoryForageKg[1],
-        (j + 1) * LANES).mul(inverse);
-    DoubleVector dTall = DoubleVector.fromArray(SPECIES, s.depletion[0], j * LANES);
-    DoubleVector dShort = DoubleVector.fromArray(SPECIES, s.depletion[0], (j + 1) * LANES);
-    DoubleVector dLow = DoubleVector.fromArray(SPECIES, s.depletion[1], j * LANES);
-    DoubleVector dHigh = DoubleVector.fromArray(SPECIES, s.depletion[1], (j + 1) * LANES);
-    DoubleVector.fromArray(SPECIES, s.pressureKg, h * LANES).add(tall.mul(dTall))
-        .add(short_.mul(dShort)).add(low.mul(dLow)).add(high.mul(dHigh))
+    DoubleVector pressure = DoubleVector.zero(SPECIES);
+    for (int b = 0; b < s.blocks; b++) {
+      int j = (h * s.blocks + b) * KINDS_PER_POOL;
+      DoubleVector tall = DoubleVector.fromArray(SPECIES, s.categoryForageKg[0], j * LANES)
+          .mul(inverse);
+      DoubleVector short_ = DoubleVector.fromArray(SPECIES, s.categoryForageKg[0],
+          (j + 1) * LANES).mul(inverse);
+      DoubleVector low = DoubleVector.fromArray(SPECIES, s.categoryForageKg[1], j * LANES)
+          .mul(inverse);
+      DoubleVector high = DoubleVector.fromArray(SPECIES, s.categoryForageKg[1],
+          (j + 1) * LANES).mul(inverse);
+      DoubleVector dTall = DoubleVector.fromArray(SPECIES, s.depletion[0], j * LANES);
+      DoubleVector dShort = DoubleVector.fromArray(SPECIES, s.depletion[0], (j + 1) * LANES);
+      DoubleVector dLow = DoubleVector.fromArray(SPECIES, s.depletion[1], j * LANES);
+      DoubleVector dHigh = DoubleVector.fromArray(SPECIES, s.depletion[1], (j + 1) * LANES);
+      pressure = pressure.add(tall.mul(dTall)).add(short_.mul(dShort)).add(low.mul(dLow))
+          .add(high.mul(dHigh));
+      // The share of demand met in a category: share / depletion where it is over-used.
+      DoubleVector metTall = tall.blend(tall.div(dTall), dTall.compare(VectorOperators.GT, 1));
+      DoubleVector metShort = short_.blend(short_.div(dShort),
+          dShort.compare(VectorOperators.GT, 1));
+      DoubleVector metLow = low.blend(low.div(dLow), dLow.compare(VectorOperators.GT, 1));
+      DoubleVector.fromArray(SPECIES, s.grazedFraction, b * LANES).add(demand.mul(metTall))
+          .add(demand.mul(metShort)).intoArray(s.grazedFraction, b * LANES);
+      DoubleVector.fromArray(SPECIES, s.browsePressure, b * LANES).add(demand.mul(metLow))
+          .intoArray(s.browsePressure, b * LANES);
+    }
+    pressure.mul(DoubleVector.fromArray(SPECIES, s.forageKg, h * LANES))
         .intoArray(s.pressureKg, h * LANES);
-    // The share of demand met in a category: share / depletion where it is over-used.
-    DoubleVector metTall = tall.blend(tall.div(dTall), dTall.compare(VectorOperators.GT, 1));
-    DoubleVector metShort = short_.blend(short_.div(dShort),
-        dShort.compare(VectorOperators.GT, 1));
-    DoubleVector metLow = low.blend(low.div(dLow), dLow.compare(VectorOperators.GT, 1));
-    DoubleVector.fromArray(SPECIES, s.grazedFraction, b * LANES).add(demand.mul(metTall))
-        .add(demand.mul(metShort)).intoArray(s.grazedFraction, b * LANES);
-    DoubleVector.fromArray(SPECIES, s.browsePressure, b * LANES).add(demand.mul(metLow))
-        .intoArray(s.browsePressure, b * LANES);
   }
 
   /** The elephants' use of block b, and the eaten kg per ha (still kg: see eat). */
