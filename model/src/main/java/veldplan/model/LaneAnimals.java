@@ -16,69 +16,65 @@ import veldplan.model.ecology.CarboneGittleman;
 final class LaneAnimals {
   private LaneAnimals() {}
 
-  private static DoubleVector load(double[] a, int entry) {
-    return DoubleVector.fromArray(SPECIES, a, entry * LANES);
-  }
-
-  private static void store(DoubleVector v, double[] a, int entry) {
-    v.intoArray(a, entry * LANES);
-  }
-
-  /** n^m as {@code PreySwitching} computes it: 1 and 2 exactly, otherwise a power. */
-  private static DoubleVector power(DoubleVector n, double m) {
-    if (m == 1) {
-      return n;
-    }
-    if (m == 2) {
-      return n.mul(n);
-    }
-    return n.lanewise(VectorOperators.POW, m);
-  }
-
   static void hunt(ModelParameters p, LaneState s) {
     HerbivoreParameters hp = p.herbivores();
-    PredatorParameters pp = p.predators();
-    int herbivores = hp.count;
-    DoubleVector zero = DoubleVector.zero(SPECIES);
-    for (int h = 0; h < herbivores; h++) {
-      store(zero, s.predationHazard, h);
-      store(load(s.abundance, h).mul(hp.bodyMassKg[h]), s.preyKg, h);
+    for (int h = 0; h < s.herbivores; h++) {
+      java.util.Arrays.fill(s.predationHazard, h * LANES, (h + 1) * LANES, 0);
+      DoubleVector.fromArray(SPECIES, s.abundance, h * LANES).mul(hp.bodyMassKg[h])
+          .intoArray(s.preyKg, h * LANES);
     }
-    for (int q = 0; q < pp.count; q++) {
-      double[] preference = pp.preference[q];
-      DoubleVector biomass = zero;
-      for (int h = 0; h < herbivores; h++) {
-        biomass = biomass.add(load(s.preyKg, h).mul(preference[h]));
-      }
-      store(biomass, s.preyBiomassKg, q);
-      DoubleVector predators = load(s.predatorAbundance, q);
-      VectorMask<Double> hunting = biomass.compare(VectorOperators.NE, 0)
-          .and(predators.compare(VectorOperators.NE, 0));
-      if (!hunting.anyTrue()) {
-        continue;
-      }
-      DoubleVector density = biomass.div(pp.parkKm2);
-      double a = pp.attackRate[q];
-      double ah = a * pp.handlingTimeYears[q];
-      // FunctionalResponse.typeII / typeIII: a n / (1 + a h n), a n^2 / (1 + a h n^2).
-      DoubleVector n = pp.responseType[q] == 3 ? density.mul(density) : density;
-      DoubleVector perPredator = n.mul(a).div(n.mul(ah).add(1));
-      DoubleVector kills = predators.mul(perPredator);
-      double m = pp.switchingExponent[q];
-      DoubleVector denominator = zero;
-      for (int h = 0; h < herbivores; h++) {
-        denominator = denominator.add(power(load(s.preyKg, h), m).mul(preference[h]));
-      }
-      VectorMask<Double> shared = hunting.and(denominator.compare(VectorOperators.NE, 0));
-      for (int h = 0; h < herbivores; h++) {
-        if (preference[h] > 0) {
-          DoubleVector prey = load(s.preyKg, h);
-          VectorMask<Double> hunted = shared.and(prey.compare(VectorOperators.GT, 0));
-          DoubleVector share = power(prey, m).mul(preference[h]).div(denominator);
-          DoubleVector hazard = load(s.predationHazard, h);
-          store(hazard.blend(hazard.add(kills.mul(share).div(prey)), hunted),
-              s.predationHazard, h);
-        }
+    for (int q = 0; q < s.predators; q++) {
+      predation(p, s, q);
+    }
+  }
+
+  /**
+   * Adds predator guild q's kills to the herbivores' hazards: the functional response to the
+   * preferred prey biomass, shared by prey switching (see {@link Animals#hunt}). Powers of 1
+   * and 2 exactly, others by the vector power, as {@code PreySwitching} does.
+   */
+  private static void predation(ModelParameters p, LaneState s, int q) {
+    PredatorParameters pp = p.predators();
+    int herbivores = s.herbivores;
+    double[] preference = pp.preference[q];
+    DoubleVector zero = DoubleVector.zero(SPECIES);
+    DoubleVector biomass = zero;
+    for (int h = 0; h < herbivores; h++) {
+      biomass = biomass.add(DoubleVector.fromArray(SPECIES, s.preyKg, h * LANES)
+          .mul(preference[h]));
+    }
+    biomass.intoArray(s.preyBiomassKg, q * LANES);
+    DoubleVector predators = DoubleVector.fromArray(SPECIES, s.predatorAbundance, q * LANES);
+    VectorMask<Double> hunting = biomass.compare(VectorOperators.NE, 0)
+        .and(predators.compare(VectorOperators.NE, 0));
+    if (!hunting.anyTrue()) {
+      return;
+    }
+    DoubleVector density = biomass.div(pp.parkKm2);
+    double a = pp.attackRate[q];
+    double ah = a * pp.handlingTimeYears[q];
+    // FunctionalResponse.typeII / typeIII: a n / (1 + a h n), a n^2 / (1 + a h n^2).
+    DoubleVector n = pp.responseType[q] == 3 ? density.mul(density) : density;
+    DoubleVector kills = predators.mul(n.mul(a).div(n.mul(ah).add(1)));
+    double m = pp.switchingExponent[q];
+    DoubleVector denominator = zero;
+    for (int h = 0; h < herbivores; h++) {
+      DoubleVector prey = DoubleVector.fromArray(SPECIES, s.preyKg, h * LANES);
+      DoubleVector power = m == 1 ? prey
+          : m == 2 ? prey.mul(prey) : prey.lanewise(VectorOperators.POW, m);
+      denominator = denominator.add(power.mul(preference[h]));
+    }
+    VectorMask<Double> shared = hunting.and(denominator.compare(VectorOperators.NE, 0));
+    for (int h = 0; h < herbivores; h++) {
+      if (preference[h] > 0) {
+        DoubleVector prey = DoubleVector.fromArray(SPECIES, s.preyKg, h * LANES);
+        DoubleVector power = m == 1 ? prey
+            : m == 2 ? prey.mul(prey) : prey.lanewise(VectorOperators.POW, m);
+        DoubleVector share = power.mul(preference[h]).div(denominator);
+        DoubleVector hazard = DoubleVector.fromArray(SPECIES, s.predationHazard, h * LANES);
+        hazard.blend(hazard.add(kills.mul(share).div(prey)),
+                shared.and(prey.compare(VectorOperators.GT, 0)))
+            .intoArray(s.predationHazard, h * LANES);
       }
     }
   }

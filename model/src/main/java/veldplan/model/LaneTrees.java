@@ -39,9 +39,7 @@ final class LaneTrees {
     for (int b = 0; b < blocks; b++) {
       blockTerms(p, f, year, s, b);
       java.util.Arrays.fill(s.nextClasses, 0);
-      for (int k = 0; k < TreeClass.COUNT; k++) {
-        treeClass(p, s, b, k);
-      }
+      treeClasses(p, s, b);
       recruitment(p, f, year, s, b);
       System.arraycopy(s.nextClasses, 0, s.treesPerHa, b * TreeClass.COUNT * LANES,
           TreeClass.COUNT * LANES);
@@ -86,8 +84,8 @@ final class LaneTrees {
     }
   }
 
-  /** Death, topkill, breakage and growth of class k in block b, into the next classes. */
-  private static void treeClass(ModelParameters p, LaneState s, int b, int k) {
+  /** Death, topkill, breakage and growth of each class of block b, into the next classes. */
+  private static void treeClasses(ModelParameters p, LaneState s, int b) {
     TreeParameters t = p.trees();
     FireParameters fp = p.fire();
     double[] terms = s.treeTerms;
@@ -97,45 +95,47 @@ final class LaneTrees {
     DoubleVector one = DoubleVector.broadcast(SPECIES, 1.0);
     DoubleVector planned = DoubleVector.fromArray(SPECIES, s.plannedBurntFraction, at);
     DoubleVector wild = DoubleVector.fromArray(SPECIES, s.wildBurntFraction, at);
-    double heightFactor = s.shared.topkillHeightFactor[k];
-    DoubleVector n = DoubleVector.fromArray(SPECIES, s.treesPerHa,
-            (b * TreeClass.COUNT + k) * LANES)
-        .mul(one.sub(DoubleVector.fromArray(SPECIES, terms, THINNING * LANES)
-            .add(t.mortalityPerYear[k]).min(1)));
-    // Topkill.probabilityOfFactors: 1 / (1 + h f), weighted by the share burnt.
-    DoubleVector plannedKill = planned.mul(one.div(DoubleVector.fromArray(SPECIES, terms,
-        PLANNED_FACTOR * LANES).mul(heightFactor).add(1)));
-    DoubleVector wildKill = wild.mul(one.div(DoubleVector.fromArray(SPECIES, terms,
-        WILD_FACTOR * LANES).mul(heightFactor).add(1)));
-    DoubleVector topkill = zero
-        .add(zero.blend(plannedKill, planned.compare(VectorOperators.GT, 0)))
-        .add(zero.blend(wildKill, wild.compare(VectorOperators.GT, 0)));
-    DoubleVector topkilled = n.mul(topkill);
-    n = n.sub(topkilled);
-    // Breakage: n x reach x (1 - exp(-a E)) where there are elephants; a rate a of 0 gives
-    // exactly 0, as the scalar code's skipping does.
-    double reach = s.shared.reach[p.herbivores().elephant * s.blocks + b];
-    DoubleVector elephants = DoubleVector.fromArray(SPECIES, terms, ELEPHANTS_IN_REACH * LANES);
-    DoubleVector broken = zero.blend(n.mul(reach).mul(one.sub(elephants
-            .mul(-t.elephantBreakageKm2PerElephant[k]).lanewise(VectorOperators.EXP))),
-        elephants.compare(VectorOperators.GT, 0));
-    n = n.sub(broken);
-    int resproutClass = Math.min(k, TreeClass.FIRE_TRAP_0_5_TO_2M.ordinal());
-    DoubleVector.fromArray(SPECIES, next, resproutClass * LANES)
-        .add(topkilled.mul(1 - fp.topkillDeathFraction()).add(broken))
-        .intoArray(next, resproutClass * LANES);
-    if (k < TreeClass.COUNT - 1) {
-      // (loss x browse) x share, in the scalar code's order.
-      DoubleVector browsed = DoubleVector.fromArray(SPECIES, s.browsePressure, at)
-          .mul(t.browsingGrowthLoss).mul(t.lowBrowseShare[k]);
-      DoubleVector moving = n.mul(DoubleVector.fromArray(SPECIES, terms, GROWTH * LANES)
-          .mul(t.transitionPerYear[k]).mul(one.sub(browsed)).min(MAX_TRANSITION));
-      DoubleVector.fromArray(SPECIES, next, k * LANES).add(n.sub(moving))
-          .intoArray(next, k * LANES);
-      DoubleVector.fromArray(SPECIES, next, (k + 1) * LANES).add(moving)
-          .intoArray(next, (k + 1) * LANES);
-    } else {
-      DoubleVector.fromArray(SPECIES, next, k * LANES).add(n).intoArray(next, k * LANES);
+    for (int k = 0; k < TreeClass.COUNT; k++) {
+      double heightFactor = s.shared.topkillHeightFactor[k];
+      DoubleVector n = DoubleVector.fromArray(SPECIES, s.treesPerHa,
+              (b * TreeClass.COUNT + k) * LANES)
+          .mul(one.sub(DoubleVector.fromArray(SPECIES, terms, THINNING * LANES)
+              .add(t.mortalityPerYear[k]).min(1)));
+      // Topkill.probabilityOfFactors: 1 / (1 + h f), weighted by the share burnt.
+      DoubleVector plannedKill = planned.mul(one.div(DoubleVector.fromArray(SPECIES, terms,
+          PLANNED_FACTOR * LANES).mul(heightFactor).add(1)));
+      DoubleVector wildKill = wild.mul(one.div(DoubleVector.fromArray(SPECIES, terms,
+          WILD_FACTOR * LANES).mul(heightFactor).add(1)));
+      DoubleVector topkill = zero
+          .add(zero.blend(plannedKill, planned.compare(VectorOperators.GT, 0)))
+          .add(zero.blend(wildKill, wild.compare(VectorOperators.GT, 0)));
+      DoubleVector topkilled = n.mul(topkill);
+      n = n.sub(topkilled);
+      // Breakage: n x reach x (1 - exp(-a E)) where there are elephants; a rate a of 0 gives
+      // exactly 0, as the scalar code's skipping does.
+      double reach = s.shared.reach[p.herbivores().elephant * s.blocks + b];
+      DoubleVector elephants = DoubleVector.fromArray(SPECIES, terms, ELEPHANTS_IN_REACH * LANES);
+      DoubleVector broken = zero.blend(n.mul(reach).mul(one.sub(elephants
+              .mul(-t.elephantBreakageKm2PerElephant[k]).lanewise(VectorOperators.EXP))),
+          elephants.compare(VectorOperators.GT, 0));
+      n = n.sub(broken);
+      int resproutClass = Math.min(k, TreeClass.FIRE_TRAP_0_5_TO_2M.ordinal());
+      DoubleVector.fromArray(SPECIES, next, resproutClass * LANES)
+          .add(topkilled.mul(1 - fp.topkillDeathFraction()).add(broken))
+          .intoArray(next, resproutClass * LANES);
+      if (k < TreeClass.COUNT - 1) {
+        // (loss x browse) x share, in the scalar code's order.
+        DoubleVector browsed = DoubleVector.fromArray(SPECIES, s.browsePressure, at)
+            .mul(t.browsingGrowthLoss).mul(t.lowBrowseShare[k]);
+        DoubleVector moving = n.mul(DoubleVector.fromArray(SPECIES, terms, GROWTH * LANES)
+            .mul(t.transitionPerYear[k]).mul(one.sub(browsed)).min(MAX_TRANSITION));
+        DoubleVector.fromArray(SPECIES, next, k * LANES).add(n.sub(moving))
+            .intoArray(next, k * LANES);
+        DoubleVector.fromArray(SPECIES, next, (k + 1) * LANES).add(moving)
+            .intoArray(next, (k + 1) * LANES);
+      } else {
+        DoubleVector.fromArray(SPECIES, next, k * LANES).add(n).intoArray(next, k * LANES);
+      }
     }
   }
 
