@@ -82,6 +82,8 @@ final class LaneState {
   final RecordedState recorded;
   /** The lane arrays, in the order of {@link #scalarArrays}. */
   private final double[][] lanes;
+  /** {@link #shared}'s arrays in the same order (the reset state of every lane). */
+  private final double[][] sharedArrays;
 
   LaneState(ModelParameters p) {
     shared = new EcosystemState(p);
@@ -132,6 +134,7 @@ final class LaneState {
         plannedIntensityKwPerM, wildBurntFraction, wildIntensityKwPerM, elephantsPerKm2,
         grassDiet, forageKg, pressureKg, predationHazard, categorySupplyKg, preyKg,
         preyBiomassKg, tallShare};
+    sharedArrays = scalarArrays(shared);
   }
 
   private static double[] lanes(int entries) {
@@ -152,9 +155,19 @@ final class LaneState {
   /** Resets every lane to the start of a run, as {@link EcosystemState#reset} does. */
   void reset(ModelParameters p) {
     shared.reset(p);
-    for (int r = 0; r < LANES; r++) {
-      pack(r, shared);
+    for (int a = 0; a < lanes.length; a++) {
+      double[] from = sharedArrays[a];
+      double[] to = lanes[a];
+      for (int i = 0; i < from.length; i++) {
+        java.util.Arrays.fill(to, i * LANES, (i + 1) * LANES, from[i]);
+      }
     }
+    java.util.Arrays.fill(costBurning, shared.costBurning);
+    java.util.Arrays.fill(costOfftake, shared.costOfftake);
+    java.util.Arrays.fill(costContraception, shared.costContraception);
+    java.util.Arrays.fill(costWater, shared.costWater);
+    java.util.Arrays.fill(elephantsRemoved, shared.elephantsRemoved);
+    java.util.Arrays.fill(femalesTreated, shared.femalesTreated);
   }
 
   /** Copies {@code s} into lane {@code lane}. */

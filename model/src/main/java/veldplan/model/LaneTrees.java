@@ -111,14 +111,18 @@ final class LaneTrees {
           .add(zero.blend(wildKill, wild.compare(VectorOperators.GT, 0)));
       DoubleVector topkilled = n.mul(topkill);
       n = n.sub(topkilled);
-      // Breakage: n x reach x (1 - exp(-a E)) where there are elephants; a rate a of 0 gives
-      // exactly 0, as the scalar code's skipping does.
-      double reach = s.shared.reach[p.herbivores().elephant * s.blocks + b];
-      DoubleVector elephants = DoubleVector.fromArray(SPECIES, terms, ELEPHANTS_IN_REACH * LANES);
-      DoubleVector broken = zero.blend(n.mul(reach).mul(one.sub(elephants
-              .mul(-t.elephantBreakageKm2PerElephant[k]).lanewise(VectorOperators.EXP))),
-          elephants.compare(VectorOperators.GT, 0));
-      n = n.sub(broken);
+      // Breakage: n x reach x (1 - exp(-a E)) where there are elephants; classes elephants
+      // do not break (a = 0) lose nothing.
+      DoubleVector broken = zero;
+      double rate = t.elephantBreakageKm2PerElephant[k];
+      if (rate > 0) {
+        double reach = s.shared.reach[p.herbivores().elephant * s.blocks + b];
+        DoubleVector elephants = DoubleVector.fromArray(SPECIES, terms,
+            ELEPHANTS_IN_REACH * LANES);
+        broken = zero.blend(n.mul(reach).mul(one.sub(elephants.mul(-rate)
+            .lanewise(VectorOperators.EXP))), elephants.compare(VectorOperators.GT, 0));
+        n = n.sub(broken);
+      }
       int resproutClass = Math.min(k, TreeClass.FIRE_TRAP_0_5_TO_2M.ordinal());
       DoubleVector.fromArray(SPECIES, next, resproutClass * LANES)
           .add(topkilled.mul(1 - fp.topkillDeathFraction()).add(broken))
