@@ -17,6 +17,8 @@ public final class Trajectory {
   final double[] initialHerbivore;
   final double[] initialPredator;
   final double[] initialLargeTreesPerHa;
+  /** The forcing of the run recorded last: its climate series are this run's. */
+  private Forcing forcing;
 
   /** Allocates a trajectory sized for {@code years} years of a park with these dimensions. */
   public Trajectory(int years, int blocks, int herbivores, int predators) {
@@ -60,11 +62,36 @@ public final class Trajectory {
 
   /** Value of a block series at the end of {@code year}. */
   public double get(BlockSeries series, int year, int b) {
+    if (forcing != null) {
+      int at = year * blocks + b;
+      switch (series) {
+        case RAINFALL:
+          return forcing.rainfallMm[at];
+        case POTENTIAL_EVAPOTRANSPIRATION:
+          return forcing.petMm[at];
+        case OPEN_WATER_EVAPORATION:
+          return forcing.openWaterEvaporationMm[at];
+        case ACTUAL_EVAPOTRANSPIRATION:
+          return forcing.aetMm[at];
+        case GROWING_DAYS:
+          return forcing.growingDays[at];
+        default:
+          break;
+      }
+    }
     return block[(year * blocks + b) * BlockSeries.COUNT + series.ordinal()];
   }
 
-  /** Sets a block series value (for building trajectories in tests and tools). */
+  /**
+   * Sets a block series value (for building trajectories in tests and tools).
+   *
+   * @throws IllegalStateException for a climate series (rainfall to growing days) of a
+   *     simulated run: those are read from the run's forcing
+   */
   public void set(BlockSeries series, int year, int b, double value) {
+    if (forcing != null && series.ordinal() <= BlockSeries.GROWING_DAYS.ordinal()) {
+      throw new IllegalStateException(series + " of a simulated run comes from its forcing");
+    }
     block[(year * blocks + b) * BlockSeries.COUNT + series.ordinal()] = value;
   }
 
@@ -167,17 +194,13 @@ public final class Trajectory {
 
   private void recordState(int year, RecordedState s, int lane, int[] waterPointsOpen,
       Forcing f) {
+    // The climate series (rainfall to growing days) are read from the forcing, not copied.
+    forcing = f;
     int nb = BlockSeries.COUNT;
     int stride = s.stride;
     for (int b = 0; b < blocks; b++) {
       int at = (year * blocks + b) * nb;
-      int fa = year * blocks + b;
       int i = b * stride + lane;
-      block[at + BlockSeries.RAINFALL.ordinal()] = f.rainfallMm[fa];
-      block[at + BlockSeries.POTENTIAL_EVAPOTRANSPIRATION.ordinal()] = f.petMm[fa];
-      block[at + BlockSeries.OPEN_WATER_EVAPORATION.ordinal()] = f.openWaterEvaporationMm[fa];
-      block[at + BlockSeries.ACTUAL_EVAPOTRANSPIRATION.ordinal()] = f.aetMm[fa];
-      block[at + BlockSeries.GROWING_DAYS.ordinal()] = f.growingDays[fa];
       block[at + BlockSeries.GRASS_PRODUCTION.ordinal()] = s.grassProductionKgPerHa[i];
       block[at + BlockSeries.FUEL.ordinal()] = s.fuelKgPerHa[i];
       double planned = s.plannedBurntFraction[i];
