@@ -59,18 +59,19 @@ final class LaneAnimals {
     double m = pp.switchingExponent[q];
     DoubleVector denominator = zero;
     for (int h = 0; h < herbivores; h++) {
-      DoubleVector prey = DoubleVector.fromArray(SPECIES, s.preyKg, h * LANES);
-      DoubleVector power = m == 1 ? prey
-          : m == 2 ? prey.mul(prey) : prey.lanewise(VectorOperators.POW, m);
-      denominator = denominator.add(power.mul(preference[h]));
+      System.arraycopy(s.preyKg, h * LANES, s.math, 0, LANES);
+      VectorMath.pow(s.math, 0, m);
+      denominator = denominator.add(DoubleVector.fromArray(SPECIES, s.math, 0)
+          .mul(preference[h]));
     }
     VectorMask<Double> shared = hunting.and(denominator.compare(VectorOperators.NE, 0));
     for (int h = 0; h < herbivores; h++) {
       if (preference[h] > 0) {
         DoubleVector prey = DoubleVector.fromArray(SPECIES, s.preyKg, h * LANES);
-        DoubleVector power = m == 1 ? prey
-            : m == 2 ? prey.mul(prey) : prey.lanewise(VectorOperators.POW, m);
-        DoubleVector share = power.mul(preference[h]).div(denominator);
+        System.arraycopy(s.preyKg, h * LANES, s.math, 0, LANES);
+        VectorMath.pow(s.math, 0, m);
+        DoubleVector share = DoubleVector.fromArray(SPECIES, s.math, 0).mul(preference[h])
+            .div(denominator);
         DoubleVector hazard = DoubleVector.fromArray(SPECIES, s.predationHazard, h * LANES);
         hazard.blend(hazard.add(kills.mul(share).div(prey)),
                 shared.and(prey.compare(VectorOperators.GT, 0)))
@@ -102,36 +103,43 @@ final class LaneAnimals {
     DoubleVector forage = DoubleVector.fromArray(SPECIES, s.forageKg, h * LANES);
     DoubleVector depletion = DoubleVector.fromArray(SPECIES, s.pressureKg, h * LANES)
         .div(forage);
-    double shape = hp.densityShape[h];
-    DoubleVector food = shape == 1 ? depletion
-        : depletion.lanewise(VectorOperators.POW, shape);
-    DoubleVector logGrowth = h == hp.elephant
-        ? elephantRate(p, year, s).sub(food.mul(
-            Math.max(Animals.ELEPHANT_FOOD_RATE, hp.maxGrowthRatePerYear[h]))).max(minimum)
-        : one.sub(food).mul(hp.maxGrowthRatePerYear[h]).max(minimum);
+    depletion.intoArray(s.math, 0);
+    VectorMath.pow(s.math, 0, hp.densityShape[h]);
+    DoubleVector food = DoubleVector.fromArray(SPECIES, s.math, 0);
+    DoubleVector logGrowth;
+    if (h == hp.elephant) {
+      elephantRate(p, year, s);
+      logGrowth = DoubleVector.fromArray(SPECIES, s.math, 0).sub(food.mul(
+          Math.max(Animals.ELEPHANT_FOOD_RATE, hp.maxGrowthRatePerYear[h]))).max(minimum);
+    } else {
+      logGrowth = one.sub(food).mul(hp.maxGrowthRatePerYear[h]).max(minimum);
+    }
     logGrowth = minimum.blend(logGrowth, forage.compare(VectorOperators.GT, 0));
     DoubleVector noise = DoubleVector.fromArray(SPECIES, f.demographicNoise,
         (year * f.noiseSlots + h) * LANES).mul(hp.noiseSd[h]);
     DoubleVector survival = one.sub(DoubleVector.fromArray(SPECIES, s.predationHazard,
         h * LANES).min(Animals.MAX_PREDATION));
-    DoubleVector next = n.mul(logGrowth.add(noise).lanewise(VectorOperators.EXP).mul(survival));
+    logGrowth.add(noise).intoArray(s.math, 0);
+    VectorMath.exp(s.math, 0);
+    DoubleVector next = n.mul(DoubleVector.fromArray(SPECIES, s.math, 0).mul(survival));
     next = DoubleVector.zero(SPECIES).blend(next, next.compare(VectorOperators.GE, 1));
     n.blend(next, alive).intoArray(s.abundance, h * LANES);
   }
 
   /**
-   * The elephants' log growth rate without food limitation: ln(1 + births (1 - efficacy x
-   * coverage a gestation earlier) - deaths), floored at ln(1e-9).
+   * The elephants' log growth rate without food limitation, into s.math: ln(1 + births (1 -
+   * efficacy x coverage a gestation earlier) - deaths), floored at ln(1e-9).
    */
-  private static DoubleVector elephantRate(ModelParameters p, int year, LaneState s) {
+  private static void elephantRate(ModelParameters p, int year, LaneState s) {
     ElephantParameters ep = p.elephants();
     double births = ep.breedingFemaleFraction() * ep.calvesPerFemalePerYear();
     DoubleVector coverage = year >= ep.gestationLagYears()
         ? DoubleVector.fromArray(SPECIES, s.coverageHistory,
             ((year - ep.gestationLagYears()) % s.lagSlots) * LANES)
         : DoubleVector.zero(SPECIES);
-    return coverage.mul(ep.contraceptionEfficacy()).neg().add(1).mul(births).add(1)
-        .sub(ep.mortalityPerYear()).max(1e-9).lanewise(VectorOperators.LOG);
+    coverage.mul(ep.contraceptionEfficacy()).neg().add(1).mul(births).add(1)
+        .sub(ep.mortalityPerYear()).max(1e-9).intoArray(s.math, 0);
+    VectorMath.log(s.math, 0);
   }
 
   /** Births and deaths of predator guild q. */
@@ -151,7 +159,9 @@ final class LaneAnimals {
         capacity.compare(VectorOperators.GT, 0));
     DoubleVector noise = DoubleVector.fromArray(SPECIES, f.demographicNoise,
         (year * f.noiseSlots + s.herbivores + q) * LANES).mul(pp.noiseSd[q]);
-    DoubleVector next = n.mul(logGrowth.add(noise).lanewise(VectorOperators.EXP));
+    logGrowth.add(noise).intoArray(s.math, 0);
+    VectorMath.exp(s.math, 0);
+    DoubleVector next = n.mul(DoubleVector.fromArray(SPECIES, s.math, 0));
     next = DoubleVector.zero(SPECIES).blend(next, next.compare(VectorOperators.GE, 1));
     n.blend(next, alive).intoArray(s.predatorAbundance, q * LANES);
   }

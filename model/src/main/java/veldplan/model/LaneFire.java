@@ -36,9 +36,10 @@ final class LaneFire {
   /** Fire.spreadFactor of block b's fuel: 1 / (1 + exp(-(fuel - minimum) / scale)). */
   private static void spread(ModelParameters p, LaneState s, int b) {
     FireParameters fp = p.fire();
-    DoubleVector.broadcast(SPECIES, 1.0).div(DoubleVector.fromArray(SPECIES, s.fuelKgPerHa,
-            b * LANES).sub(fp.minimumFuelKgPerHa()).neg().div(fp.fuelSpreadScaleKgPerHa())
-            .lanewise(VectorOperators.EXP).add(1))
+    DoubleVector.fromArray(SPECIES, s.fuelKgPerHa, b * LANES).sub(fp.minimumFuelKgPerHa())
+        .neg().div(fp.fuelSpreadScaleKgPerHa()).intoArray(s.math, 0);
+    VectorMath.exp(s.math, 0);
+    DoubleVector.broadcast(SPECIES, 1.0).div(DoubleVector.fromArray(SPECIES, s.math, 0).add(1))
         .intoArray(s.fireSpread, b * LANES);
   }
 
@@ -78,8 +79,10 @@ final class LaneFire {
         .mul(DoubleVector.fromArray(SPECIES, f.curedSeasonFactor, forcingAt));
     // Fire.ignites: surely lit above one bound, surely not below the other, the exact test
     // draw < 1 - exp(-rate) between them.
+    rate.neg().intoArray(s.math, 0);
+    VectorMath.exp(s.math, 0);
     VectorMask<Double> exact = DoubleVector.fromArray(SPECIES, f.ignitionDraw, forcingAt)
-        .compare(VectorOperators.LT, one.sub(rate.neg().lanewise(VectorOperators.EXP)));
+        .compare(VectorOperators.LT, one.sub(DoubleVector.fromArray(SPECIES, s.math, 0)));
     VectorMask<Double> lit = rate.compare(VectorOperators.GT,
             DoubleVector.fromArray(SPECIES, f.ignitionLitAbove, forcingAt))
         .or(rate.compare(VectorOperators.GE,

@@ -23,9 +23,10 @@ final class LaneGrass {
       }
       basalArea.intoArray(s.basalAreaM2PerHa, at);
       // TreeGrassCompetition.negativeExponential: G0 exp(-k X).
+      basalArea.mul(suppression).intoArray(s.math, 0);
+      VectorMath.exp(s.math, 0);
       DoubleVector production = DoubleVector.fromArray(SPECIES, f.grassPotentialKgPerHa,
-          (year * blocks + b) * LANES)
-          .mul(basalArea.mul(suppression).lanewise(VectorOperators.EXP));
+          (year * blocks + b) * LANES).mul(DoubleVector.fromArray(SPECIES, s.math, 0));
       production.intoArray(s.grassProductionKgPerHa, at);
       production.add(DoubleVector.fromArray(SPECIES, s.leftoverGrassKgPerHa, at)
               .mul(g.carryOverFraction()))

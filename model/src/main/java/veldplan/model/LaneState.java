@@ -68,6 +68,8 @@ final class LaneState {
   // ---- scratch, lane-innermost
   final double[] nextClasses = new double[TreeClass.COUNT * LANES];
   final double[] treeTerms = new double[LaneTrees.TERMS * LANES];
+  /** One vector's worth of scratch for {@link VectorMath}. */
+  final double[] math = new double[LANES];
   /** Fire.spreadFactor of each block's fuel this year. */
   final double[] fireSpread;
   /** The elephants' grass and browse within reach, summed over blocks. */

@@ -70,11 +70,13 @@ final class LaneTrees {
     // Topkill.intensityFactor: exp(-b sqrt(I)).
     double coefficient = -fp.topkillSqrtIntensity();
     DoubleVector.fromArray(SPECIES, s.plannedIntensityKwPerM, at)
-        .lanewise(VectorOperators.SQRT).mul(coefficient).lanewise(VectorOperators.EXP)
+        .lanewise(VectorOperators.SQRT).mul(coefficient)
         .intoArray(terms, PLANNED_FACTOR * LANES);
+    VectorMath.exp(terms, PLANNED_FACTOR * LANES);
     DoubleVector.fromArray(SPECIES, s.wildIntensityKwPerM, at)
-        .lanewise(VectorOperators.SQRT).mul(coefficient).lanewise(VectorOperators.EXP)
+        .lanewise(VectorOperators.SQRT).mul(coefficient)
         .intoArray(terms, WILD_FACTOR * LANES);
+    VectorMath.exp(terms, WILD_FACTOR * LANES);
     double reach = s.shared.reach[p.herbivores().elephant * s.blocks + b];
     if (reach > 0) {
       DoubleVector.fromArray(SPECIES, s.elephantsPerKm2, at).div(reach)
@@ -119,8 +121,10 @@ final class LaneTrees {
         double reach = s.shared.reach[p.herbivores().elephant * s.blocks + b];
         DoubleVector elephants = DoubleVector.fromArray(SPECIES, terms,
             ELEPHANTS_IN_REACH * LANES);
-        broken = zero.blend(n.mul(reach).mul(one.sub(elephants.mul(-rate)
-            .lanewise(VectorOperators.EXP))), elephants.compare(VectorOperators.GT, 0));
+        elephants.mul(-rate).intoArray(s.math, 0);
+        VectorMath.exp(s.math, 0);
+        broken = zero.blend(n.mul(reach).mul(one.sub(DoubleVector.fromArray(SPECIES, s.math,
+            0))), elephants.compare(VectorOperators.GT, 0));
         n = n.sub(broken);
       }
       int resproutClass = Math.min(k, TreeClass.FIRE_TRAP_0_5_TO_2M.ordinal());

@@ -80,6 +80,44 @@ class LaneSimulatorTest {
     System.out.printf(Locale.ROOT, "%s: worst relative difference %.2e%n", policy, worst);
   }
 
+  @org.junit.jupiter.api.Test
+  void aRun_givesTheSameBits_beforeAndAfterTheJitCompilesTheEngine() {
+    // The first run executes the engine interpreted (the Vector API's Java fallbacks); after a
+    // few hundred runs it is compiled to vector instructions. Same bits both times, because
+    // the engine uses only IEEE operations (VectorMath, not the Vector API's EXP/LOG/POW).
+    TestParks park = new TestParks();
+    park.blocks = 4;
+    park.years = 30;
+    park.replicates = LaneState.LANES;
+    park.fireReturnIntervalYears = 2.0;
+    park.elephants = 2000;
+    park.offtake = 0.03;
+    ModelParameters p = park.parameters();
+    Study study = park.study(p);
+    ManagementPlan plan = park.plan();
+    Forcing[] forcing = new Forcing[LaneState.LANES];
+    Trajectory[] cold = new Trajectory[LaneState.LANES];
+    Trajectory[] hot = new Trajectory[LaneState.LANES];
+    for (int r = 0; r < LaneState.LANES; r++) {
+      forcing[r] = study.forcing(0, r);
+      cold[r] = new Trajectory(p);
+      hot[r] = new Trajectory(p);
+    }
+    LaneForcing lanes = new LaneForcing(forcing);
+    LaneSimulator simulator = new LaneSimulator(p);
+    LaneState state = new LaneState(p);
+    simulator.run(plan, lanes, state, cold);
+    for (int i = 0; i < 400; i++) {
+      simulator.run(plan, lanes, state, hot);
+    }
+    for (int r = 0; r < LaneState.LANES; r++) {
+      org.junit.jupiter.api.Assertions.assertArrayEquals(cold[r].block, hot[r].block);
+      org.junit.jupiter.api.Assertions.assertArrayEquals(cold[r].herbivore, hot[r].herbivore);
+      org.junit.jupiter.api.Assertions.assertArrayEquals(cold[r].predator, hot[r].predator);
+      org.junit.jupiter.api.Assertions.assertArrayEquals(cold[r].park, hot[r].park);
+    }
+  }
+
   private static double compare(double[] expected, double[] actual, String where) {
     double worst = 0;
     for (int i = 0; i < expected.length; i++) {
