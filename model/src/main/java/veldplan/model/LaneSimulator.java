@@ -21,19 +21,66 @@ public final class LaneSimulator {
     this.scalar = new Simulator(params);
   }
 
-  /** Replicates per run: one per vector lane on this machine. */
+  /** Replicates per lockstep run: one per vector lane on this machine. */
   public static int lanes() {
     return LANES;
+  }
+
+  /** What one thread needs to run batches: the lockstep state and spare trajectories. */
+  public static final class Workspace {
+    final LaneState state;
+    final Trajectory[] lanes = new Trajectory[LANES];
+    final Trajectory[] spare = new Trajectory[LANES];
+
+    private Workspace(ModelParameters p) {
+      state = new LaneState(p);
+      for (int r = 0; r < LANES; r++) {
+        spare[r] = new Trajectory(p);
+      }
+    }
+  }
+
+  /** A workspace for one thread. */
+  public Workspace workspace() {
+    return new Workspace(params);
+  }
+
+  /**
+   * Runs replicates {@code first .. first + count - 1} of path {@code path} of the study in
+   * lockstep, replicate {@code first + i} into {@code out[i]}. Lanes beyond the study's last
+   * replicate repeat it and are discarded; every lane depends on its own replicate only, so a
+   * replicate's trajectory is the same in whichever batch and lane it runs.
+   *
+   * @param count 1 .. {@link #lanes()}
+   * @throws IllegalStateException if a run fails (a model bug); the message names the path,
+   *     replicate, seed and policy, and where the state first went wrong
+   */
+  public void run(ManagementPlan plan, Study study, int path, int first, int count,
+      Workspace workspace, Trajectory[] out) {
+    if (count < 1 || count > LANES || first < 0 || first + count > study.replicates()) {
+      throw new IllegalArgumentException("replicates " + first + ".." + (first + count - 1)
+          + " of " + study.replicates() + " in a batch of " + LANES);
+    }
+    Trajectory[] lanes = workspace.lanes;
+    for (int r = 0; r < LANES; r++) {
+      lanes[r] = r < count ? out[r] : workspace.spare[r];
+    }
+    LaneForcing forcing = study.laneForcing(path, first);
+    try {
+      run(plan, forcing, workspace.state, lanes);
+    } catch (LaneFailure e) {
+      throw Ensemble.failure(study, path, first + e.lane, plan, e.cause);
+    }
   }
 
   /**
    * Runs {@code forcing}'s replicates. Resets {@code state}, then writes every year of lane r
    * into {@code out[r]}.
    *
-   * @throws IllegalStateException if a lane's state becomes non-finite or negative (a model
-   *     bug); the message is the scalar simulator's, naming the process, year and variable
+   * @throws LaneFailure if a lane's state becomes non-finite or negative (a model bug); its
+   *     cause is the scalar simulator's diagnosis, naming the process, year and variable
    */
-  public void run(ManagementPlan plan, LaneForcing forcing, LaneState state, Trajectory[] out) {
+  void run(ManagementPlan plan, LaneForcing forcing, LaneState state, Trajectory[] out) {
     if (out.length != LANES) {
       throw new IllegalArgumentException(out.length + " trajectories for " + LANES + " lanes");
     }
@@ -64,12 +111,32 @@ public final class LaneSimulator {
     EcosystemState view = state.view;
     for (int r = 0; r < LANES; r++) {
       state.unpack(r, view);
-      if (view.violation() != null) {
+      String problem = view.violation();
+      if (problem != null) {
         // The scalar run of the same replicate finds and names where it went wrong.
-        scalar.run(plan, forcing.replicates[r], new EcosystemState(p), new Trajectory(p));
-        throw new IllegalStateException("model state invalid in lane " + r + ": "
-            + view.violation());
+        RuntimeException cause;
+        try {
+          scalar.run(plan, forcing.replicates[r], new EcosystemState(p), new Trajectory(p));
+          cause = new IllegalStateException("model state invalid at the end of the run: "
+              + problem);
+        } catch (RuntimeException diagnosed) {
+          cause = diagnosed;
+        }
+        throw new LaneFailure(r, cause);
       }
+    }
+  }
+
+  /** A lane's run failed; {@link #cause} says where. */
+  static final class LaneFailure extends IllegalStateException {
+    private static final long serialVersionUID = 1L;
+    final int lane;
+    final transient RuntimeException cause;
+
+    LaneFailure(int lane, RuntimeException cause) {
+      super("lane " + lane + ": " + cause.getMessage(), cause);
+      this.lane = lane;
+      this.cause = cause;
     }
   }
 }
