@@ -47,7 +47,7 @@ final class Animals {
   /** Smallest rate at which food limits elephant growth (1/yr); our choice. */
   static final double ELEPHANT_FOOD_RATE = 0.02;
   /** Largest share of a guild predators can take in a year. */
-  private static final double MAX_PREDATION = 0.95;
+  static final double MAX_PREDATION = 0.95;
 
   private Animals() {}
 

@@ -108,6 +108,8 @@ public final class EcosystemState {
       "forageKg", "pressureKg", "predationHazard", "preyBiomassKg", "coverageHistory"};
   /** The state arrays that must stay finite and non-negative. */
   private final double[][] checked;
+  /** What a trajectory records, as one run (stride 1). */
+  final RecordedState recorded;
 
   /** Allocates every array once for parameters {@code p}. */
   public EcosystemState(ModelParameters p) {
@@ -155,6 +157,9 @@ public final class EcosystemState {
     usableWeight = new double[Herbivory.POOLS][pooled];
     overlap = new double[herbivores * Herbivory.POOLS][pooled];
     depletion = new double[Herbivory.POOLS][pooled];
+    recorded = new RecordedState(1, grassProductionKgPerHa, fuelKgPerHa, plannedBurntFraction,
+        wildBurntFraction, plannedIntensityKwPerM, wildIntensityKwPerM, basalAreaM2PerHa,
+        treesPerHa, browsePressure, elephantsPerKm2, abundance, predatorAbundance);
     setRunConstants(p);
   }
 

@@ -9,8 +9,9 @@ import java.util.concurrent.Future;
 
 /**
  * Runs one policy on every (climate path, replicate) of a {@link Study}, in parallel over
- * threads. The result does not depend on the thread count: each run depends only on its own
- * forcing and the plan, and its trajectory goes to its own slot.
+ * threads, {@link LaneSimulator#lanes()} replicates at a time in lockstep. The result does not
+ * depend on the thread count: each run depends only on its own forcing and the plan, and its
+ * trajectory goes to its own slot.
  */
 public final class Ensemble {
   private Ensemble() {}
@@ -39,7 +40,9 @@ public final class Ensemble {
     int paths = study.paths().size();
     int replicates = study.replicates();
     ModelParameters p = study.parameters();
-    Simulator simulator = new Simulator(p);
+    LaneSimulator simulator = new LaneSimulator(p);
+    int lanes = LaneSimulator.lanes();
+    int batches = (replicates + lanes - 1) / lanes;
     Trajectory[][] out = new Trajectory[paths][replicates];
     ExecutorService pool = Executors.newFixedThreadPool(threads, r -> {
       Thread t = new Thread(r, "veldplan-run");
@@ -51,18 +54,21 @@ public final class Ensemble {
       for (int worker = 0; worker < threads; worker++) {
         final int first = worker;
         tasks.add(pool.submit(() -> {
-          EcosystemState state = new EcosystemState(p);
-          for (int job = first; job < paths * replicates; job += threads) {
-            int path = job / replicates;
-            int replicate = job % replicates;
-            Trajectory trajectory = new Trajectory(p);
-            try {
-              simulator.run(plan, study.forcing(path, replicate), state, trajectory);
-            } catch (RuntimeException e) {
-              throw failure(study, path, replicate, plan, e);
+          LaneSimulator.Workspace workspace = simulator.workspace();
+          Trajectory[] batch = new Trajectory[lanes];
+          // One job per path and batch of replicates run in lockstep.
+          for (int job = first; job < paths * batches; job += threads) {
+            int path = job / batches;
+            int from = (job % batches) * lanes;
+            int count = Math.min(lanes, replicates - from);
+            for (int i = 0; i < count; i++) {
+              batch[i] = new Trajectory(p);
             }
-            out[path][replicate] = trajectory;
-            progress.runFinished();
+            simulator.run(plan, study, path, from, count, workspace, batch);
+            for (int i = 0; i < count; i++) {
+              out[path][from + i] = batch[i];
+              progress.runFinished();
+            }
           }
         }));
       }

@@ -25,6 +25,11 @@ public final class Simulator {
     }
   }
 
+  /** Present-value factor of the costs of model year {@code year} (paid at its end). */
+  double discountFactor(int year) {
+    return discountFactor[year];
+  }
+
   /** The parameters. */
   public ModelParameters parameters() {
     return params;

@@ -22,6 +22,8 @@ public final class Study {
   private final long seed;
   private final Forcing[] forcing;
   private final Seasons seasons;
+  private final java.util.concurrent.ConcurrentHashMap<Long, LaneForcing> laneForcing =
+      new java.util.concurrent.ConcurrentHashMap<>();
 
   /**
    * Builds the forcing of every path and replicate.
@@ -91,5 +93,20 @@ public final class Study {
   /** The forcing of replicate {@code replicate} of path {@code path}. */
   public Forcing forcing(int path, int replicate) {
     return forcing[path * replicates + replicate];
+  }
+
+  /**
+   * The forcing of replicates {@code first .. first + LANES - 1} of path {@code path} side by
+   * side for the lockstep engine; lanes past the last replicate repeat it. Built once per
+   * (path, first) and kept; the same whichever thread builds it.
+   */
+  LaneForcing laneForcing(int path, int first) {
+    return laneForcing.computeIfAbsent((long) path * replicates + first, key -> {
+      Forcing[] lanes = new Forcing[LaneState.LANES];
+      for (int r = 0; r < lanes.length; r++) {
+        lanes[r] = forcing(path, Math.min(first + r, replicates - 1));
+      }
+      return new LaneForcing(lanes);
+    });
   }
 }

@@ -17,6 +17,8 @@ public final class Trajectory {
   final double[] initialHerbivore;
   final double[] initialPredator;
   final double[] initialLargeTreesPerHa;
+  /** The forcing of the run recorded last: its climate series are this run's. */
+  private Forcing forcing;
 
   /** Allocates a trajectory sized for {@code years} years of a park with these dimensions. */
   public Trajectory(int years, int blocks, int herbivores, int predators) {
@@ -60,11 +62,36 @@ public final class Trajectory {
 
   /** Value of a block series at the end of {@code year}. */
   public double get(BlockSeries series, int year, int b) {
+    if (forcing != null) {
+      int at = year * blocks + b;
+      switch (series) {
+        case RAINFALL:
+          return forcing.rainfallMm[at];
+        case POTENTIAL_EVAPOTRANSPIRATION:
+          return forcing.petMm[at];
+        case OPEN_WATER_EVAPORATION:
+          return forcing.openWaterEvaporationMm[at];
+        case ACTUAL_EVAPOTRANSPIRATION:
+          return forcing.aetMm[at];
+        case GROWING_DAYS:
+          return forcing.growingDays[at];
+        default:
+          break;
+      }
+    }
     return block[(year * blocks + b) * BlockSeries.COUNT + series.ordinal()];
   }
 
-  /** Sets a block series value (for building trajectories in tests and tools). */
+  /**
+   * Sets a block series value (for building trajectories in tests and tools).
+   *
+   * @throws IllegalStateException for a climate series (rainfall to growing days) of a
+   *     simulated run: those are read from the run's forcing
+   */
   public void set(BlockSeries series, int year, int b, double value) {
+    if (forcing != null && series.ordinal() <= BlockSeries.GROWING_DAYS.ordinal()) {
+      throw new IllegalStateException(series + " of a simulated run comes from its forcing");
+    }
     block[(year * blocks + b) * BlockSeries.COUNT + series.ordinal()] = value;
   }
 
@@ -122,64 +149,100 @@ public final class Trajectory {
 
   /** Records the start of a run from the state just reset. */
   void recordStart(EcosystemState s) {
-    System.arraycopy(s.abundance, 0, initialHerbivore, 0, herbivores);
-    System.arraycopy(s.predatorAbundance, 0, initialPredator, 0, predators);
+    recordStart(s.recorded, 0);
+  }
+
+  /** Records the start of lane {@code lane}'s run from the lockstep state just reset. */
+  void recordStart(LaneState s, int lane) {
+    recordStart(s.recorded, lane);
+  }
+
+  private void recordStart(RecordedState s, int lane) {
+    int stride = s.stride;
+    for (int h = 0; h < herbivores; h++) {
+      initialHerbivore[h] = s.abundance[h * stride + lane];
+    }
+    for (int q = 0; q < predators; q++) {
+      initialPredator[q] = s.predatorAbundance[q * stride + lane];
+    }
     for (int b = 0; b < blocks; b++) {
-      initialLargeTreesPerHa[b] = largeTrees(s, b);
+      initialLargeTreesPerHa[b] = largeTrees(s, lane, b);
     }
   }
 
-  private static double largeTrees(EcosystemState s, int b) {
+  private static double largeTrees(RecordedState s, int lane, int b) {
     double sum = 0;
     for (int k = TreeClass.FIRST_LARGE; k < TreeClass.COUNT; k++) {
-      sum += s.treesPerHa[b * TreeClass.COUNT + k];
+      sum += s.treesPerHa[(b * TreeClass.COUNT + k) * s.stride + lane];
     }
     return sum;
   }
 
   /** Records the end of year {@code year}. Allocates nothing. */
   void record(int year, EcosystemState s, Forcing f, double discountFactor) {
+    recordState(year, s.recorded, 0, s.waterPointsOpen, f);
+    recordPark(year, s.costBurning, s.costOfftake, s.costContraception, s.costWater,
+        s.elephantsRemoved, s.femalesTreated, f, discountFactor);
+  }
+
+  /** Records the end of year {@code year} of lane {@code lane}. Allocates nothing. */
+  void record(int year, LaneState s, int lane, Forcing f, double discountFactor) {
+    recordState(year, s.recorded, lane, s.shared.waterPointsOpen, f);
+    recordPark(year, s.costBurning[lane], s.costOfftake[lane], s.costContraception[lane],
+        s.costWater[lane], s.elephantsRemoved[lane], s.femalesTreated[lane], f, discountFactor);
+  }
+
+  private void recordState(int year, RecordedState s, int lane, int[] waterPointsOpen,
+      Forcing f) {
+    // The climate series (rainfall to growing days) are read from the forcing, not copied.
+    forcing = f;
     int nb = BlockSeries.COUNT;
+    int stride = s.stride;
     for (int b = 0; b < blocks; b++) {
       int at = (year * blocks + b) * nb;
-      int fa = year * blocks + b;
-      block[at + BlockSeries.RAINFALL.ordinal()] = f.rainfallMm[fa];
-      block[at + BlockSeries.POTENTIAL_EVAPOTRANSPIRATION.ordinal()] = f.petMm[fa];
-      block[at + BlockSeries.OPEN_WATER_EVAPORATION.ordinal()] = f.openWaterEvaporationMm[fa];
-      block[at + BlockSeries.ACTUAL_EVAPOTRANSPIRATION.ordinal()] = f.aetMm[fa];
-      block[at + BlockSeries.GROWING_DAYS.ordinal()] = f.growingDays[fa];
-      block[at + BlockSeries.GRASS_PRODUCTION.ordinal()] = s.grassProductionKgPerHa[b];
-      block[at + BlockSeries.FUEL.ordinal()] = s.fuelKgPerHa[b];
-      double planned = s.plannedBurntFraction[b];
-      double wild = s.wildBurntFraction[b];
+      int i = b * stride + lane;
+      block[at + BlockSeries.GRASS_PRODUCTION.ordinal()] = s.grassProductionKgPerHa[i];
+      block[at + BlockSeries.FUEL.ordinal()] = s.fuelKgPerHa[i];
+      double planned = s.plannedBurntFraction[i];
+      double wild = s.wildBurntFraction[i];
       block[at + BlockSeries.BURNT_FRACTION.ordinal()] = planned + wild;
       block[at + BlockSeries.PLANNED_BURNT_FRACTION.ordinal()] = planned;
       block[at + BlockSeries.FIRE_INTENSITY.ordinal()] = planned + wild > 0
-          ? (planned * s.plannedIntensityKwPerM[b] + wild * s.wildIntensityKwPerM[b])
+          ? (planned * s.plannedIntensityKwPerM[i] + wild * s.wildIntensityKwPerM[i])
               / (planned + wild)
           : 0;
-      block[at + BlockSeries.BASAL_AREA.ordinal()] = s.basalAreaM2PerHa[b];
+      block[at + BlockSeries.BASAL_AREA.ordinal()] = s.basalAreaM2PerHa[i];
       int trees = b * TreeClass.COUNT;
       for (int k = 0; k < TreeClass.COUNT; k++) {
-        block[at + BlockSeries.TREES_BELOW_0_5M.ordinal() + k] = s.treesPerHa[trees + k];
+        block[at + BlockSeries.TREES_BELOW_0_5M.ordinal() + k] =
+            s.treesPerHa[(trees + k) * stride + lane];
       }
-      block[at + BlockSeries.LARGE_TREES.ordinal()] = largeTrees(s, b);
-      block[at + BlockSeries.BROWSE_PRESSURE.ordinal()] = s.browsePressure[b];
-      block[at + BlockSeries.ELEPHANT_DENSITY.ordinal()] = s.elephantsPerKm2[b];
-      block[at + BlockSeries.WATER_POINTS_OPEN.ordinal()] = s.waterPointsOpen[b];
+      block[at + BlockSeries.LARGE_TREES.ordinal()] = largeTrees(s, lane, b);
+      block[at + BlockSeries.BROWSE_PRESSURE.ordinal()] = s.browsePressure[i];
+      block[at + BlockSeries.ELEPHANT_DENSITY.ordinal()] = s.elephantsPerKm2[i];
+      block[at + BlockSeries.WATER_POINTS_OPEN.ordinal()] = waterPointsOpen[b];
     }
-    System.arraycopy(s.abundance, 0, herbivore, year * herbivores, herbivores);
-    System.arraycopy(s.predatorAbundance, 0, predator, year * predators, predators);
+    for (int h = 0; h < herbivores; h++) {
+      herbivore[year * herbivores + h] = s.abundance[h * stride + lane];
+    }
+    for (int q = 0; q < predators; q++) {
+      predator[year * predators + q] = s.predatorAbundance[q * stride + lane];
+    }
+  }
+
+  private void recordPark(int year, double costBurning, double costOfftake,
+      double costContraception, double costWater, double elephantsRemoved,
+      double femalesTreated, Forcing f, double discountFactor) {
     int at = year * ParkSeries.COUNT;
-    double total = s.costBurning + s.costOfftake + s.costContraception + s.costWater;
-    park[at + ParkSeries.COST_BURNING.ordinal()] = s.costBurning;
-    park[at + ParkSeries.COST_ELEPHANT_OFFTAKE.ordinal()] = s.costOfftake;
-    park[at + ParkSeries.COST_CONTRACEPTION.ordinal()] = s.costContraception;
-    park[at + ParkSeries.COST_WATER_POINTS.ordinal()] = s.costWater;
+    double total = costBurning + costOfftake + costContraception + costWater;
+    park[at + ParkSeries.COST_BURNING.ordinal()] = costBurning;
+    park[at + ParkSeries.COST_ELEPHANT_OFFTAKE.ordinal()] = costOfftake;
+    park[at + ParkSeries.COST_CONTRACEPTION.ordinal()] = costContraception;
+    park[at + ParkSeries.COST_WATER_POINTS.ordinal()] = costWater;
     park[at + ParkSeries.COST_TOTAL.ordinal()] = total;
     park[at + ParkSeries.COST_DISCOUNTED.ordinal()] = total * discountFactor;
-    park[at + ParkSeries.ELEPHANTS_REMOVED.ordinal()] = s.elephantsRemoved;
-    park[at + ParkSeries.FEMALES_TREATED.ordinal()] = s.femalesTreated;
+    park[at + ParkSeries.ELEPHANTS_REMOVED.ordinal()] = elephantsRemoved;
+    park[at + ParkSeries.FEMALES_TREATED.ordinal()] = femalesTreated;
     park[at + ParkSeries.CO2.ordinal()] = f.co2Ppm[year];
   }
 }

@@ -17,8 +17,18 @@ public final class Main implements Runnable {
   public static void main(String[] args) {
     // Charts are drawn off screen; no display is needed.
     System.setProperty("java.awt.headless", "true");
+    if (ModuleLayer.boot().findModule(VECTOR_MODULE).isEmpty()) {
+      System.err.println("error: veldplan needs the JDK's " + VECTOR_MODULE + " module (its"
+          + " simulator runs several replicates at once with vector instructions). Run it with"
+          + " ./veldplan, which adds it, or with java --add-modules " + VECTOR_MODULE
+          + " -jar ...");
+      System.exit(ExitCodes.FAILURE);
+    }
     System.exit(execute(args));
   }
+
+  /** The JDK 17 incubator module of the Vector API, which the simulator uses. */
+  static final String VECTOR_MODULE = "jdk.incubator.vector";
 
   /** Runs the command line and returns the exit code (for tests). */
   public static int execute(String... args) {

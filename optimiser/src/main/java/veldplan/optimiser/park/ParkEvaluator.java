@@ -6,12 +6,11 @@ import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
 import java.util.concurrent.atomic.AtomicInteger;
-import veldplan.model.EcosystemState;
 import veldplan.model.Ensemble;
 import veldplan.model.ManagementPlan;
 import veldplan.model.ModelParameters;
 import veldplan.model.ParametersFromScenario;
-import veldplan.model.Simulator;
+import veldplan.model.LaneSimulator;
 import veldplan.model.Study;
 import veldplan.model.Trajectory;
 import veldplan.objectives.Estimate;
@@ -43,7 +42,7 @@ public final class ParkEvaluator implements AutoCloseable {
   private final List<Objective> measures;
   private final PathStep pathStep;
   private final int threads;
-  private final Simulator simulator;
+  private final LaneSimulator simulator;
   private final ExecutorService pool;
 
   /**
@@ -63,7 +62,7 @@ public final class ParkEvaluator implements AutoCloseable {
     this.measures = List.copyOf(measures);
     this.pathStep = pathStep;
     this.threads = threads;
-    this.simulator = new Simulator(study.parameters());
+    this.simulator = new LaneSimulator(study.parameters());
     this.pool = Executors.newFixedThreadPool(threads, r -> {
       Thread t = new Thread(r, "veldplan-evaluate");
       t.setDaemon(true);
@@ -100,32 +99,41 @@ public final class ParkEvaluator implements AutoCloseable {
       plans.add(ParametersFromScenario.plan(policy, scenario));
     }
     int perPolicy = paths * replicates;
-    int jobs = policies.size() * perPolicy;
-    // values[(job * m) + measure]: one slot per run and measure.
-    double[] values = new double[jobs * m];
+    // values[(run * m) + measure]: one slot per run and measure, run = (policy, path,
+    // replicate) in that order.
+    double[] values = new double[policies.size() * perPolicy * m];
+    // One job per (policy, path, batch of replicates run in lockstep).
+    int lanes = LaneSimulator.lanes();
+    int batches = (replicates + lanes - 1) / lanes;
+    int jobs = policies.size() * paths * batches;
     AtomicInteger next = new AtomicInteger();
     List<Future<?>> tasks = new ArrayList<>();
     ModelParameters p = study.parameters();
     for (int w = 0; w < Math.min(threads, Math.max(1, jobs)); w++) {
       tasks.add(pool.submit(() -> {
-        EcosystemState state = new EcosystemState(p);
-        Trajectory trajectory = new Trajectory(p);
+        LaneSimulator.Workspace workspace = simulator.workspace();
+        Trajectory[] batch = new Trajectory[lanes];
+        for (int i = 0; i < lanes; i++) {
+          batch[i] = new Trajectory(p);
+        }
         for (int job = next.getAndIncrement(); job < jobs; job = next.getAndIncrement()) {
-          int policy = job / perPolicy;
-          int path = (job % perPolicy) / replicates;
-          int replicate = firstReplicate + job % replicates;
+          int policy = job / (paths * batches);
+          int path = (job / batches) % paths;
+          int from = (job % batches) * lanes;
+          int count = Math.min(lanes, replicates - from);
           ManagementPlan plan = plans.get(policy);
           try {
-            simulator.run(plan, study.forcing(path, replicate), state, trajectory);
+            simulator.run(plan, study, path, firstReplicate + from, count, workspace, batch);
           } catch (RuntimeException e) {
-            throw new PolicyRunException(
-                Ensemble.failure(study, path, replicate, plan, e).getMessage(),
-                policies.get(policy), e);
+            throw new PolicyRunException(e.getMessage(), policies.get(policy), e);
           }
-          for (int k = 0; k < m; k++) {
-            values[job * m + k] = measures.get(k).of(trajectory);
+          for (int i = 0; i < count; i++) {
+            int run = policy * perPolicy + path * replicates + from + i;
+            for (int k = 0; k < m; k++) {
+              values[run * m + k] = measures.get(k).of(batch[i]);
+            }
+            progress.runFinished();
           }
-          progress.runFinished();
         }
       }));
     }

@@ -109,7 +109,7 @@ class OptimiseCommandTest {
     Path killed = dir.resolve("killed");
     List<String> command = new ArrayList<>(List.of(
         Path.of(System.getProperty("java.home"), "bin", "java").toString(),
-        "-Djava.awt.headless=true", "-cp", System.getProperty("java.class.path"),
+        "--add-modules", "jdk.incubator.vector", "-Djava.awt.headless=true", "-cp", System.getProperty("java.class.path"),
         Main.class.getName()));
     command.addAll(sized(killed, 8, 40, "--threads", "1"));
     Process p = new ProcessBuilder(command).redirectErrorStream(true)
