@@ -79,14 +79,17 @@ final class LaneFire {
         .mul(DoubleVector.fromArray(SPECIES, f.curedSeasonFactor, forcingAt));
     // Fire.ignites: surely lit above one bound, surely not below the other, the exact test
     // draw < 1 - exp(-rate) between them.
-    rate.neg().intoArray(s.math, 0);
-    VectorMath.exp(s.math, 0);
-    VectorMask<Double> exact = DoubleVector.fromArray(SPECIES, f.ignitionDraw, forcingAt)
-        .compare(VectorOperators.LT, one.sub(DoubleVector.fromArray(SPECIES, s.math, 0)));
-    VectorMask<Double> lit = rate.compare(VectorOperators.GT,
-            DoubleVector.fromArray(SPECIES, f.ignitionLitAbove, forcingAt))
-        .or(rate.compare(VectorOperators.GE,
-            DoubleVector.fromArray(SPECIES, f.ignitionUnlitBelow, forcingAt)).and(exact));
+    VectorMask<Double> surelyLit = rate.compare(VectorOperators.GT,
+        DoubleVector.fromArray(SPECIES, f.ignitionLitAbove, forcingAt));
+    VectorMask<Double> undecided = surelyLit.not().and(rate.compare(VectorOperators.GE,
+        DoubleVector.fromArray(SPECIES, f.ignitionUnlitBelow, forcingAt)));
+    VectorMask<Double> lit = surelyLit;
+    if (undecided.anyTrue()) { // the exponential only where some lane needs it
+      rate.neg().intoArray(s.math, 0);
+      VectorMath.exp(s.math, 0);
+      lit = lit.or(undecided.and(DoubleVector.fromArray(SPECIES, f.ignitionDraw, forcingAt)
+          .compare(VectorOperators.LT, one.sub(DoubleVector.fromArray(SPECIES, s.math, 0)))));
+    }
     DoubleVector intensity = fuel.mul(0.8684).add(2729)
         .sub(DoubleVector.fromArray(SPECIES, f.moistureTermLate, 0))
         .sub(DoubleVector.fromArray(SPECIES, f.humidityTermLate, forcingAt)).sub(windTerm)

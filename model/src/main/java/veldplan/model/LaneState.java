@@ -68,6 +68,9 @@ final class LaneState {
   // ---- scratch, lane-innermost
   final double[] nextClasses = new double[TreeClass.COUNT * LANES];
   final double[] treeTerms = new double[LaneTrees.TERMS * LANES];
+  /** Whether some lane has a planned / an unplanned fire in the block being updated. */
+  boolean plannedFireInBlock;
+  boolean wildFireInBlock;
   /** One vector's worth of scratch for {@link VectorMath}. */
   final double[] math = new double[LANES];
   /** Fire.spreadFactor of each block's fuel this year. */

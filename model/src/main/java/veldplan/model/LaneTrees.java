@@ -29,8 +29,9 @@ final class LaneTrees {
   private static final int PLANNED_FACTOR = 3;
   private static final int WILD_FACTOR = 4;
   private static final int ELEPHANTS_IN_REACH = 5;
+  private static final int TOPKILL = 6;
   /** Number of rows. */
-  static final int TERMS = 6;
+  static final int TERMS = 7;
 
   private LaneTrees() {}
 
@@ -67,16 +68,28 @@ final class LaneTrees {
         .intoArray(terms, THINNING * LANES);
     DoubleVector.fromArray(SPECIES, f.treeGrowthIndex, forcingAt).mul(competition)
         .intoArray(terms, GROWTH * LANES);
-    // Topkill.intensityFactor: exp(-b sqrt(I)).
+    // Topkill.intensityFactor: exp(-b sqrt(I)), where some lane has a fire of that kind (the
+    // factors of lanes without one are never used).
     double coefficient = -fp.topkillSqrtIntensity();
-    DoubleVector.fromArray(SPECIES, s.plannedIntensityKwPerM, at)
-        .lanewise(VectorOperators.SQRT).mul(coefficient)
-        .intoArray(terms, PLANNED_FACTOR * LANES);
-    VectorMath.exp(terms, PLANNED_FACTOR * LANES);
-    DoubleVector.fromArray(SPECIES, s.wildIntensityKwPerM, at)
-        .lanewise(VectorOperators.SQRT).mul(coefficient)
-        .intoArray(terms, WILD_FACTOR * LANES);
-    VectorMath.exp(terms, WILD_FACTOR * LANES);
+    s.plannedFireInBlock = DoubleVector.fromArray(SPECIES, s.plannedBurntFraction, at)
+        .compare(VectorOperators.GT, 0).anyTrue();
+    s.wildFireInBlock = DoubleVector.fromArray(SPECIES, s.wildBurntFraction, at)
+        .compare(VectorOperators.GT, 0).anyTrue();
+    if (s.plannedFireInBlock) {
+      DoubleVector.fromArray(SPECIES, s.plannedIntensityKwPerM, at)
+          .lanewise(VectorOperators.SQRT).mul(coefficient)
+          .intoArray(terms, PLANNED_FACTOR * LANES);
+      VectorMath.exp(terms, PLANNED_FACTOR * LANES);
+    }
+    if (s.wildFireInBlock) {
+      DoubleVector.fromArray(SPECIES, s.wildIntensityKwPerM, at)
+          .lanewise(VectorOperators.SQRT).mul(coefficient)
+          .intoArray(terms, WILD_FACTOR * LANES);
+      VectorMath.exp(terms, WILD_FACTOR * LANES);
+    }
+    if (!s.plannedFireInBlock && !s.wildFireInBlock) {
+      zero.intoArray(terms, TOPKILL * LANES);
+    }
     double reach = s.shared.reach[p.herbivores().elephant * s.blocks + b];
     if (reach > 0) {
       DoubleVector.fromArray(SPECIES, s.elephantsPerKm2, at).div(reach)
@@ -95,22 +108,17 @@ final class LaneTrees {
     int at = b * LANES;
     DoubleVector zero = DoubleVector.zero(SPECIES);
     DoubleVector one = DoubleVector.broadcast(SPECIES, 1.0);
-    DoubleVector planned = DoubleVector.fromArray(SPECIES, s.plannedBurntFraction, at);
-    DoubleVector wild = DoubleVector.fromArray(SPECIES, s.wildBurntFraction, at);
     for (int k = 0; k < TreeClass.COUNT; k++) {
       double heightFactor = s.shared.topkillHeightFactor[k];
       DoubleVector n = DoubleVector.fromArray(SPECIES, s.treesPerHa,
               (b * TreeClass.COUNT + k) * LANES)
           .mul(one.sub(DoubleVector.fromArray(SPECIES, terms, THINNING * LANES)
               .add(t.mortalityPerYear[k]).min(1)));
-      // Topkill.probabilityOfFactors: 1 / (1 + h f), weighted by the share burnt.
-      DoubleVector plannedKill = planned.mul(one.div(DoubleVector.fromArray(SPECIES, terms,
-          PLANNED_FACTOR * LANES).mul(heightFactor).add(1)));
-      DoubleVector wildKill = wild.mul(one.div(DoubleVector.fromArray(SPECIES, terms,
-          WILD_FACTOR * LANES).mul(heightFactor).add(1)));
-      DoubleVector topkill = zero
-          .add(zero.blend(plannedKill, planned.compare(VectorOperators.GT, 0)))
-          .add(zero.blend(wildKill, wild.compare(VectorOperators.GT, 0)));
+      // Topkill: 0 in a block no fire reached in any lane (TOPKILL row zeroed in blockTerms).
+      if (s.plannedFireInBlock || s.wildFireInBlock) {
+        topkill(s, b, heightFactor);
+      }
+      DoubleVector topkill = DoubleVector.fromArray(SPECIES, terms, TOPKILL * LANES);
       DoubleVector topkilled = n.mul(topkill);
       n = n.sub(topkilled);
       // Breakage: n x reach x (1 - exp(-a E)) where there are elephants; classes elephants
@@ -145,6 +153,26 @@ final class LaneTrees {
         DoubleVector.fromArray(SPECIES, next, k * LANES).add(n).intoArray(next, k * LANES);
       }
     }
+  }
+
+  /**
+   * Topkill.probabilityOfFactors, 1 / (1 + h f), weighted by the share burnt and summed over
+   * the planned and the unplanned fire, into the TOPKILL row; 0 in lanes without a fire.
+   */
+  private static void topkill(LaneState s, int b, double heightFactor) {
+    double[] terms = s.treeTerms;
+    int at = b * LANES;
+    DoubleVector zero = DoubleVector.zero(SPECIES);
+    DoubleVector one = DoubleVector.broadcast(SPECIES, 1.0);
+    DoubleVector planned = DoubleVector.fromArray(SPECIES, s.plannedBurntFraction, at);
+    DoubleVector wild = DoubleVector.fromArray(SPECIES, s.wildBurntFraction, at);
+    DoubleVector plannedKill = planned.mul(one.div(DoubleVector.fromArray(SPECIES, terms,
+        PLANNED_FACTOR * LANES).mul(heightFactor).add(1)));
+    DoubleVector wildKill = wild.mul(one.div(DoubleVector.fromArray(SPECIES, terms,
+        WILD_FACTOR * LANES).mul(heightFactor).add(1)));
+    zero.add(zero.blend(plannedKill, planned.compare(VectorOperators.GT, 0)))
+        .add(zero.blend(wildKill, wild.compare(VectorOperators.GT, 0)))
+        .intoArray(terms, TOPKILL * LANES);
   }
 
   /** Seedlings from large trees and seed rain, damped by competition. */
