@@ -45,7 +45,7 @@ public class LaneProcessBenchmark {
     params = park.study.parameters();
     plan = park.plan;
     Forcing[] replicates = new Forcing[LaneState.LANES];
-    out = new Trajectory[LaneState.LANES];
+    out = Trajectory.batch(params);
     state = new LaneState(params);
     for (int r = 0; r < LaneState.LANES; r++) {
       replicates[r] = park.study.forcing(0, r);
@@ -58,7 +58,6 @@ public class LaneProcessBenchmark {
       if (r == 0) {
         Management.startOfYear(params, plan, 20, state.shared);
       }
-      out[r] = new Trajectory(params);
     }
     forcing = new LaneForcing(replicates);
   }
@@ -75,11 +74,7 @@ public class LaneProcessBenchmark {
       case 5 -> LaneAnimals.hunt(params, state);
       case 6 -> LaneAnimals.breedAndDie(params, forcing, 20, state);
       case 7 -> LaneManagement.endOfYear(params, plan, 20, state);
-      default -> {
-        for (int r = 0; r < LaneState.LANES; r++) {
-          out[r].record(20, state, r, forcing.replicates[r], 1.0);
-        }
-      }
+      default -> Trajectory.record(out, 20, state, forcing, 1.0);
     }
     return state;
   }

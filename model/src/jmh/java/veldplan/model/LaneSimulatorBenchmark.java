@@ -43,10 +43,9 @@ public class LaneSimulatorBenchmark {
     simulator = new LaneSimulator(p);
     plan = park.plan;
     Forcing[] replicates = new Forcing[LaneState.LANES];
-    trajectories = new Trajectory[LaneState.LANES];
+    trajectories = Trajectory.batch(p);
     for (int r = 0; r < LaneState.LANES; r++) {
       replicates[r] = park.study.forcing(0, r);
-      trajectories[r] = new Trajectory(p);
     }
     forcing = new LaneForcing(replicates);
     state = new LaneState(p);

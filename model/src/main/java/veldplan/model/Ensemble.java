@@ -55,15 +55,12 @@ public final class Ensemble {
         final int first = worker;
         tasks.add(pool.submit(() -> {
           LaneSimulator.Workspace workspace = simulator.workspace();
-          Trajectory[] batch = new Trajectory[lanes];
           // One job per path and batch of replicates run in lockstep.
           for (int job = first; job < paths * batches; job += threads) {
             int path = job / batches;
             int from = (job % batches) * lanes;
             int count = Math.min(lanes, replicates - from);
-            for (int i = 0; i < count; i++) {
-              batch[i] = new Trajectory(p);
-            }
+            Trajectory[] batch = Trajectory.batch(p);
             simulator.run(plan, study, path, from, count, workspace, batch);
             for (int i = 0; i < count; i++) {
               out[path][from + i] = batch[i];

@@ -26,17 +26,12 @@ public final class LaneSimulator {
     return LANES;
   }
 
-  /** What one thread needs to run batches: the lockstep state and spare trajectories. */
+  /** What one thread needs to run batches: the lockstep state. */
   public static final class Workspace {
     final LaneState state;
-    final Trajectory[] lanes = new Trajectory[LANES];
-    final Trajectory[] spare = new Trajectory[LANES];
 
     private Workspace(ModelParameters p) {
       state = new LaneState(p);
-      for (int r = 0; r < LANES; r++) {
-        spare[r] = new Trajectory(p);
-      }
     }
   }
 
@@ -47,9 +42,10 @@ public final class LaneSimulator {
 
   /**
    * Runs replicates {@code first .. first + count - 1} of path {@code path} of the study in
-   * lockstep, replicate {@code first + i} into {@code out[i]}. Lanes beyond the study's last
-   * replicate repeat it and are discarded; every lane depends on its own replicate only, so a
-   * replicate's trajectory is the same in whichever batch and lane it runs.
+   * lockstep, replicate {@code first + i} into {@code out[i]} of a batch made by
+   * {@link Trajectory#batch}; the other lanes of the batch get replicates to discard (lanes
+   * beyond the study's last replicate repeat it). Every lane depends on its own replicate only,
+   * so a replicate's trajectory is the same in whichever batch and lane it runs.
    *
    * @param count 1 .. {@link #lanes()}
    * @throws IllegalStateException if a run fails (a model bug); the message names the path,
@@ -61,13 +57,9 @@ public final class LaneSimulator {
       throw new IllegalArgumentException("replicates " + first + ".." + (first + count - 1)
           + " of " + study.replicates() + " in a batch of " + LANES);
     }
-    Trajectory[] lanes = workspace.lanes;
-    for (int r = 0; r < LANES; r++) {
-      lanes[r] = r < count ? out[r] : workspace.spare[r];
-    }
     LaneForcing forcing = study.laneForcing(path, first);
     try {
-      run(plan, forcing, workspace.state, lanes);
+      run(plan, forcing, workspace.state, out);
     } catch (LaneFailure e) {
       throw Ensemble.failure(study, path, first + e.lane, plan, e.cause);
     }
@@ -81,8 +73,9 @@ public final class LaneSimulator {
    *     cause is the scalar simulator's diagnosis, naming the process, year and variable
    */
   void run(ManagementPlan plan, LaneForcing forcing, LaneState state, Trajectory[] out) {
-    if (out.length != LANES) {
-      throw new IllegalArgumentException(out.length + " trajectories for " + LANES + " lanes");
+    if (!Trajectory.isBatch(out)) {
+      throw new IllegalArgumentException("the trajectories are not a batch of " + LANES
+          + " made by Trajectory.batch");
     }
     if (plan.blocks() != params.blocks().count) {
       throw new IllegalArgumentException("plan has " + plan.blocks() + " blocks, park has "
@@ -90,9 +83,7 @@ public final class LaneSimulator {
     }
     ModelParameters p = params;
     state.reset(p);
-    for (int r = 0; r < LANES; r++) {
-      out[r].recordStart(state, r);
-    }
+    Trajectory.recordStart(out, state);
     for (int year = 0; year < p.years(); year++) {
       state.shared.year = year;
       LaneManagement.startOfYear(p, plan, year, state);
@@ -104,9 +95,7 @@ public final class LaneSimulator {
       LaneAnimals.breedAndDie(p, forcing, year, state);
       LaneManagement.endOfYear(p, plan, year, state);
       double discount = scalar.discountFactor(year);
-      for (int r = 0; r < LANES; r++) {
-        out[r].record(year, state, r, forcing.replicates[r], discount);
-      }
+      Trajectory.record(out, year, state, forcing, discount);
     }
     EcosystemState view = state.view;
     for (int r = 0; r < LANES; r++) {

@@ -10,23 +10,8 @@ import org.junit.jupiter.api.Test;
 class DeterminismTest {
 
   private static double[] flatten(Trajectory[][] runs) {
-    int n = 0;
-    for (Trajectory[] path : runs) {
-      for (Trajectory t : path) {
-        n += t.block.length + t.herbivore.length + t.predator.length + t.park.length;
-      }
-    }
-    double[] all = new double[n];
-    int at = 0;
-    for (Trajectory[] path : runs) {
-      for (Trajectory t : path) {
-        for (double[] part : new double[][] {t.block, t.herbivore, t.predator, t.park}) {
-          System.arraycopy(part, 0, all, at, part.length);
-          at += part.length;
-        }
-      }
-    }
-    return all;
+    return Arrays.stream(runs).flatMap(Arrays::stream).map(Trajectory::values)
+        .flatMapToDouble(Arrays::stream).toArray();
   }
 
   @Test

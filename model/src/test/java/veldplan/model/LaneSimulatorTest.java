@@ -55,10 +55,9 @@ class LaneSimulatorTest {
     int lanes = LaneState.LANES;
     // Replicates 1..LANES: not starting at 0, so a lane is never confused with its index.
     Forcing[] forcing = new Forcing[lanes];
-    Trajectory[] lockstep = new Trajectory[lanes];
+    Trajectory[] lockstep = Trajectory.batch(p);
     for (int r = 0; r < lanes; r++) {
       forcing[r] = study.forcing(0, r + 1);
-      lockstep[r] = new Trajectory(p);
     }
     new LaneSimulator(p).run(plan, new LaneForcing(forcing), new LaneState(p), lockstep);
     Simulator simulator = new Simulator(p);
@@ -68,14 +67,7 @@ class LaneSimulatorTest {
       Trajectory expected = new Trajectory(p);
       simulator.run(plan, forcing[r], state, expected);
       String where = policy + ", lane " + r;
-      worst = Math.max(worst, compare(expected.block, lockstep[r].block, where + ", blocks"));
-      worst = Math.max(worst, compare(expected.herbivore, lockstep[r].herbivore,
-          where + ", herbivores"));
-      worst = Math.max(worst, compare(expected.predator, lockstep[r].predator,
-          where + ", predators"));
-      worst = Math.max(worst, compare(expected.park, lockstep[r].park, where + ", park"));
-      worst = Math.max(worst, compare(expected.initialLargeTreesPerHa,
-          lockstep[r].initialLargeTreesPerHa, where + ", initial large trees"));
+      worst = Math.max(worst, compare(expected.values(), lockstep[r].values(), where));
     }
     System.out.printf(Locale.ROOT, "%s: worst relative difference %.2e%n", policy, worst);
   }
@@ -96,12 +88,10 @@ class LaneSimulatorTest {
     Study study = park.study(p);
     ManagementPlan plan = park.plan();
     Forcing[] forcing = new Forcing[LaneState.LANES];
-    Trajectory[] cold = new Trajectory[LaneState.LANES];
-    Trajectory[] hot = new Trajectory[LaneState.LANES];
+    Trajectory[] cold = Trajectory.batch(p);
+    Trajectory[] hot = Trajectory.batch(p);
     for (int r = 0; r < LaneState.LANES; r++) {
       forcing[r] = study.forcing(0, r);
-      cold[r] = new Trajectory(p);
-      hot[r] = new Trajectory(p);
     }
     LaneForcing lanes = new LaneForcing(forcing);
     LaneSimulator simulator = new LaneSimulator(p);
@@ -111,10 +101,7 @@ class LaneSimulatorTest {
       simulator.run(plan, lanes, state, hot);
     }
     for (int r = 0; r < LaneState.LANES; r++) {
-      org.junit.jupiter.api.Assertions.assertArrayEquals(cold[r].block, hot[r].block);
-      org.junit.jupiter.api.Assertions.assertArrayEquals(cold[r].herbivore, hot[r].herbivore);
-      org.junit.jupiter.api.Assertions.assertArrayEquals(cold[r].predator, hot[r].predator);
-      org.junit.jupiter.api.Assertions.assertArrayEquals(cold[r].park, hot[r].park);
+      org.junit.jupiter.api.Assertions.assertArrayEquals(cold[r].values(), hot[r].values());
     }
   }
 

@@ -112,10 +112,7 @@ public final class ParkEvaluator implements AutoCloseable {
     for (int w = 0; w < Math.min(threads, Math.max(1, jobs)); w++) {
       tasks.add(pool.submit(() -> {
         LaneSimulator.Workspace workspace = simulator.workspace();
-        Trajectory[] batch = new Trajectory[lanes];
-        for (int i = 0; i < lanes; i++) {
-          batch[i] = new Trajectory(p);
-        }
+        Trajectory[] batch = Trajectory.batch(p);
         for (int job = next.getAndIncrement(); job < jobs; job = next.getAndIncrement()) {
           int policy = job / (paths * batches);
           int path = (job / batches) % paths;
