@@ -11,6 +11,7 @@ import static veldplan.model.LaneState.LANES;
 import static veldplan.model.LaneState.SPECIES;
 
 import jdk.incubator.vector.DoubleVector;
+import jdk.incubator.vector.VectorMask;
 import jdk.incubator.vector.VectorOperators;
 
 /**
@@ -261,11 +262,15 @@ final class LaneHerbivory {
       DoubleVector dHigh = DoubleVector.fromArray(SPECIES, s.depletion[1], (j + 1) * LANES);
       pressure = pressure.add(tall.mul(dTall)).add(short_.mul(dShort)).add(low.mul(dLow))
           .add(high.mul(dHigh));
-      // The share of demand met in a category: share / depletion where it is over-used.
-      DoubleVector metTall = tall.blend(tall.div(dTall), dTall.compare(VectorOperators.GT, 1));
-      DoubleVector metShort = short_.blend(short_.div(dShort),
-          dShort.compare(VectorOperators.GT, 1));
-      DoubleVector metLow = low.blend(low.div(dLow), dLow.compare(VectorOperators.GT, 1));
+      // The share of demand met in a category: share / depletion where it is over-used (the
+      // division only where some lane over-uses the category).
+      VectorMask<Double> overTall = dTall.compare(VectorOperators.GT, 1);
+      VectorMask<Double> overShort = dShort.compare(VectorOperators.GT, 1);
+      VectorMask<Double> overLow = dLow.compare(VectorOperators.GT, 1);
+      DoubleVector metTall = overTall.anyTrue() ? tall.blend(tall.div(dTall), overTall) : tall;
+      DoubleVector metShort = overShort.anyTrue()
+          ? short_.blend(short_.div(dShort), overShort) : short_;
+      DoubleVector metLow = overLow.anyTrue() ? low.blend(low.div(dLow), overLow) : low;
       DoubleVector.fromArray(SPECIES, s.grazedFraction, b * LANES).add(demand.mul(metTall))
           .add(demand.mul(metShort)).intoArray(s.grazedFraction, b * LANES);
       DoubleVector.fromArray(SPECIES, s.browsePressure, b * LANES).add(demand.mul(metLow))
