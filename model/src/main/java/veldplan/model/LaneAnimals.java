@@ -81,12 +81,42 @@ final class LaneAnimals {
   }
 
   static void breedAndDie(ModelParameters p, LaneForcing f, int year, LaneState s) {
+    // Each guild's log growth (noise included) into animalScratch, every exponential at once,
+    // then the new abundances.
     for (int h = 0; h < s.herbivores; h++) {
       herbivore(p, f, year, s, h);
     }
     for (int q = 0; q < s.predators; q++) {
       predator(p, f, year, s, q);
     }
+    VectorMath.exp(s.animalScratch, 0, s.herbivores + s.predators);
+    for (int h = 0; h < s.herbivores; h++) {
+      grow(s.abundance, h, s.animalScratch, h, s.predationHazard, true);
+    }
+    for (int q = 0; q < s.predators; q++) {
+      grow(s.predatorAbundance, q, s.animalScratch, s.herbivores + q, null, false);
+    }
+  }
+
+  /**
+   * n x e^(log growth) (x (1 - min(0.95, hazard)) for prey), set to 0 below 1 animal; guilds
+   * already at 0 stay there.
+   */
+  private static void grow(double[] abundance, int i, double[] growth, int g,
+      double[] hazard, boolean prey) {
+    DoubleVector n = DoubleVector.fromArray(SPECIES, abundance, i * LANES);
+    VectorMask<Double> alive = n.compare(VectorOperators.NE, 0);
+    if (!alive.anyTrue()) {
+      return;
+    }
+    DoubleVector factor = DoubleVector.fromArray(SPECIES, growth, g * LANES);
+    if (prey) {
+      factor = factor.mul(DoubleVector.broadcast(SPECIES, 1.0).sub(
+          DoubleVector.fromArray(SPECIES, hazard, i * LANES).min(Animals.MAX_PREDATION)));
+    }
+    DoubleVector next = n.mul(factor);
+    next = DoubleVector.zero(SPECIES).blend(next, next.compare(VectorOperators.GE, 1));
+    n.blend(next, alive).intoArray(abundance, i * LANES);
   }
 
   /** Births and deaths of herbivore h (a guild or the elephants). */
@@ -94,8 +124,8 @@ final class LaneAnimals {
       int h) {
     HerbivoreParameters hp = p.herbivores();
     DoubleVector n = DoubleVector.fromArray(SPECIES, s.abundance, h * LANES);
-    VectorMask<Double> alive = n.compare(VectorOperators.NE, 0);
-    if (!alive.anyTrue()) {
+    if (!n.compare(VectorOperators.NE, 0).anyTrue()) {
+      java.util.Arrays.fill(s.animalScratch, h * LANES, (h + 1) * LANES, 0);
       return;
     }
     DoubleVector minimum = DoubleVector.broadcast(SPECIES, Animals.MIN_LOG_GROWTH);
@@ -117,13 +147,7 @@ final class LaneAnimals {
     logGrowth = minimum.blend(logGrowth, forage.compare(VectorOperators.GT, 0));
     DoubleVector noise = DoubleVector.fromArray(SPECIES, f.demographicNoise,
         (year * f.noiseSlots + h) * LANES).mul(hp.noiseSd[h]);
-    DoubleVector survival = one.sub(DoubleVector.fromArray(SPECIES, s.predationHazard,
-        h * LANES).min(Animals.MAX_PREDATION));
-    logGrowth.add(noise).intoArray(s.math, 0);
-    VectorMath.exp(s.math, 0);
-    DoubleVector next = n.mul(DoubleVector.fromArray(SPECIES, s.math, 0).mul(survival));
-    next = DoubleVector.zero(SPECIES).blend(next, next.compare(VectorOperators.GE, 1));
-    n.blend(next, alive).intoArray(s.abundance, h * LANES);
+    logGrowth.add(noise).intoArray(s.animalScratch, h * LANES);
   }
 
   /**
@@ -146,8 +170,9 @@ final class LaneAnimals {
   private static void predator(ModelParameters p, LaneForcing f, int year, LaneState s, int q) {
     PredatorParameters pp = p.predators();
     DoubleVector n = DoubleVector.fromArray(SPECIES, s.predatorAbundance, q * LANES);
-    VectorMask<Double> alive = n.compare(VectorOperators.NE, 0);
-    if (!alive.anyTrue()) {
+    int g = s.herbivores + q;
+    if (!n.compare(VectorOperators.NE, 0).anyTrue()) {
+      java.util.Arrays.fill(s.animalScratch, g * LANES, (g + 1) * LANES, 0);
       return;
     }
     DoubleVector minimum = DoubleVector.broadcast(SPECIES, Animals.MIN_LOG_GROWTH);
@@ -159,10 +184,6 @@ final class LaneAnimals {
         capacity.compare(VectorOperators.GT, 0));
     DoubleVector noise = DoubleVector.fromArray(SPECIES, f.demographicNoise,
         (year * f.noiseSlots + s.herbivores + q) * LANES).mul(pp.noiseSd[q]);
-    logGrowth.add(noise).intoArray(s.math, 0);
-    VectorMath.exp(s.math, 0);
-    DoubleVector next = n.mul(DoubleVector.fromArray(SPECIES, s.math, 0));
-    next = DoubleVector.zero(SPECIES).blend(next, next.compare(VectorOperators.GE, 1));
-    n.blend(next, alive).intoArray(s.predatorAbundance, q * LANES);
+    logGrowth.add(noise).intoArray(s.animalScratch, g * LANES);
   }
 }

@@ -22,7 +22,11 @@ final class LaneFire {
       LaneState s) {
     double windTerm = Trollope.windTerm(p.fire().windSpeedMPerS());
     for (int b = 0; b < s.blocks; b++) {
-      spread(p, s, b);
+      spreadArgument(p, s, b);
+    }
+    VectorMath.exp(s.fireSpread, 0, s.blocks);
+    for (int b = 0; b < s.blocks; b++) {
+      spread(s, b);
       if (plan.burnsIn(b, year)) {
         plannedBurn(plan, f, year, s, b, windTerm);
       } else {
@@ -33,14 +37,17 @@ final class LaneFire {
     }
   }
 
-  /** Fire.spreadFactor of block b's fuel: 1 / (1 + exp(-(fuel - minimum) / scale)). */
-  private static void spread(ModelParameters p, LaneState s, int b) {
+  /** -(fuel - minimum) / scale of block b, into fireSpread, for the exponential. */
+  private static void spreadArgument(ModelParameters p, LaneState s, int b) {
     FireParameters fp = p.fire();
     DoubleVector.fromArray(SPECIES, s.fuelKgPerHa, b * LANES).sub(fp.minimumFuelKgPerHa())
-        .neg().div(fp.fuelSpreadScaleKgPerHa()).intoArray(s.math, 0);
-    VectorMath.exp(s.math, 0);
-    DoubleVector.broadcast(SPECIES, 1.0).div(DoubleVector.fromArray(SPECIES, s.math, 0).add(1))
-        .intoArray(s.fireSpread, b * LANES);
+        .neg().div(fp.fuelSpreadScaleKgPerHa()).intoArray(s.fireSpread, b * LANES);
+  }
+
+  /** Fire.spreadFactor of block b: 1 / (1 + exp(-(fuel - minimum) / scale)), in place. */
+  private static void spread(LaneState s, int b) {
+    DoubleVector.broadcast(SPECIES, 1.0).div(DoubleVector.fromArray(SPECIES, s.fireSpread,
+        b * LANES).add(1)).intoArray(s.fireSpread, b * LANES);
   }
 
   /** The planned burn of block b: Trollope's intensity in the policy's season, share burnt. */

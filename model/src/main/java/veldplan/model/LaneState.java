@@ -73,6 +73,12 @@ final class LaneState {
   boolean wildFireInBlock;
   /** One vector's worth of scratch for {@link VectorMath}. */
   final double[] math = new double[LANES];
+  /** One vector per block, for exponentials taken for every block at once. */
+  final double[] blockScratch;
+  /** One vector per herbivore and predator, for their growth exponentials. */
+  final double[] animalScratch;
+  /** One vector per block and tree class, for the elephant-breakage exponentials. */
+  final double[] breakageScratch;
   /** Fire.spreadFactor of each block's fuel this year. */
   final double[] fireSpread;
   /** The elephants' grass and browse within reach, summed over blocks. */
@@ -123,6 +129,9 @@ final class LaneState {
     preyBiomassKg = lanes(predators);
     tallShare = lanes(blocks);
     fireSpread = lanes(blocks);
+    blockScratch = lanes(blocks);
+    animalScratch = lanes(herbivores + predators);
+    breakageScratch = lanes(blocks * TreeClass.COUNT);
     int pooled = herbivores * blocks * Herbivory.KINDS_PER_POOL;
     categoryForageKg = new double[][] {lanes(pooled), lanes(pooled)};
     inverseForage = lanes(herbivores);

@@ -37,6 +37,11 @@ final class LaneTrees {
 
   static void update(ModelParameters p, LaneForcing f, int year, LaneState s) {
     int blocks = s.blocks;
+    // Elephant breakage: -a_k E of every block and class, then every exponential at once.
+    for (int b = 0; b < blocks; b++) {
+      breakageArguments(p, s, b);
+    }
+    VectorMath.exp(s.breakageScratch, 0, blocks * TreeClass.COUNT);
     for (int b = 0; b < blocks; b++) {
       blockTerms(p, f, year, s, b);
       java.util.Arrays.fill(s.nextClasses, 0);
@@ -124,15 +129,13 @@ final class LaneTrees {
       // Breakage: n x reach x (1 - exp(-a E)) where there are elephants; classes elephants
       // do not break (a = 0) lose nothing.
       DoubleVector broken = zero;
-      double rate = t.elephantBreakageKm2PerElephant[k];
-      if (rate > 0) {
+      if (t.elephantBreakageKm2PerElephant[k] > 0) {
         double reach = s.shared.reach[p.herbivores().elephant * s.blocks + b];
         DoubleVector elephants = DoubleVector.fromArray(SPECIES, terms,
             ELEPHANTS_IN_REACH * LANES);
-        elephants.mul(-rate).intoArray(s.math, 0);
-        VectorMath.exp(s.math, 0);
-        broken = zero.blend(n.mul(reach).mul(one.sub(DoubleVector.fromArray(SPECIES, s.math,
-            0))), elephants.compare(VectorOperators.GT, 0));
+        broken = zero.blend(n.mul(reach).mul(one.sub(DoubleVector.fromArray(SPECIES,
+                s.breakageScratch, (b * TreeClass.COUNT + k) * LANES))),
+            elephants.compare(VectorOperators.GT, 0));
         n = n.sub(broken);
       }
       int resproutClass = Math.min(k, TreeClass.FIRE_TRAP_0_5_TO_2M.ordinal());
@@ -173,6 +176,22 @@ final class LaneTrees {
     zero.add(zero.blend(plannedKill, planned.compare(VectorOperators.GT, 0)))
         .add(zero.blend(wildKill, wild.compare(VectorOperators.GT, 0)))
         .intoArray(terms, TOPKILL * LANES);
+  }
+
+  /**
+   * -a_k E for every class k of block b, E the elephants per km2 within reach (0 without
+   * reach), into s.breakageScratch for the exponential exp(-a_k E) of the breakage.
+   */
+  private static void breakageArguments(ModelParameters p, LaneState s, int b) {
+    TreeParameters t = p.trees();
+    double reach = s.shared.reach[p.herbivores().elephant * s.blocks + b];
+    DoubleVector elephants = reach > 0
+        ? DoubleVector.fromArray(SPECIES, s.elephantsPerKm2, b * LANES).div(reach)
+        : DoubleVector.zero(SPECIES);
+    for (int k = 0; k < TreeClass.COUNT; k++) {
+      elephants.mul(-t.elephantBreakageKm2PerElephant[k])
+          .intoArray(s.breakageScratch, (b * TreeClass.COUNT + k) * LANES);
+    }
   }
 
   /** Seedlings from large trees and seed rain, damped by competition. */

@@ -41,6 +41,18 @@ final class VectorMath {
 
   private VectorMath() {}
 
+  /**
+   * {@link #exp(double[], int)} of {@code vectors} consecutive vectors from {@code at}: one call
+   * for many independent exponentials, which the processor then computes overlapped (a single
+   * exponential is a chain of dependent operations that leaves most of it idle).
+   */
+  static void exp(double[] a, int at, int vectors) {
+    int lanes = SPECIES.length();
+    for (int v = 0; v < vectors; v++) {
+      exp(a, at + v * lanes);
+    }
+  }
+
   /** a[at .. at + lanes) = e^a[at .. at + lanes); 0 below e^-708.4, +inf above e^709.78. */
   static void exp(double[] a, int at) {
     DoubleVector x = DoubleVector.fromArray(SPECIES, a, at);
