@@ -76,9 +76,16 @@ final class VectorMath {
     DoubleVector v0 = u1.mul(r4).add(u0);
     DoubleVector v1 = q6.mul(r4).add(u2);
     DoubleVector p = v1.mul(r4.mul(r4)).add(v0);
-    // 2^k as 2^k1 x 2^k2, k1 = k >> 1, k2 = k - k1 (each a normal double for |k| <= 1024),
-    // from the bits of t, whose low bits hold k: bits(t) - bits(ROUND) = k.
+    // 2^k from the bits of t, whose low bits hold k: bits(t) - bits(ROUND) = k.
     LongVector kBits = ((LongVector) t.reinterpretAsLongs()).sub(ROUND_BITS);
+    if (x.lanewise(VectorOperators.ABS).compare(VectorOperators.LE, 708).allTrue()) {
+      // |k| <= 1022: 2^k is a normal double, and p x 2^k is exactly what the general path
+      // below gives (multiplying by powers of two is exact while the result is normal).
+      p.mul(kBits.add(1023).lanewise(VectorOperators.LSHL, 52).reinterpretAsDoubles())
+          .intoArray(a, at);
+      return;
+    }
+    // In general 2^k as 2^k1 x 2^k2, k1 = k >> 1, k2 = k - k1 (each normal for |k| <= 1024).
     LongVector k1 = kBits.lanewise(VectorOperators.ASHR, 1);
     DoubleVector scale1 = k1.add(1023).lanewise(VectorOperators.LSHL, 52).reinterpretAsDoubles();
     DoubleVector scale2 = kBits.sub(k1).add(1023).lanewise(VectorOperators.LSHL, 52)
