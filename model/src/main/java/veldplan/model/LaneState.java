@@ -77,8 +77,12 @@ final class LaneState {
   final double[] blockScratch;
   /** One vector per herbivore and predator, for their growth exponentials. */
   final double[] animalScratch;
-  /** One vector per block and tree class, for the elephant-breakage exponentials. */
+  /** One vector per block and tree class that elephants break, for the breakage exponentials. */
   final double[] breakageScratch;
+  /** Per tree class, its index among the classes elephants break (rate &gt; 0), or -1. */
+  final int[] breakingIndex = new int[TreeClass.COUNT];
+  /** Number of tree classes elephants break. */
+  final int breakingClasses;
   /** Fire.spreadFactor of each block's fuel this year. */
   final double[] fireSpread;
   /** The elephants' grass and browse within reach, summed over blocks. */
@@ -131,7 +135,12 @@ final class LaneState {
     fireSpread = lanes(blocks);
     blockScratch = lanes(blocks);
     animalScratch = lanes(herbivores + predators);
-    breakageScratch = lanes(blocks * TreeClass.COUNT);
+    int breaking = 0;
+    for (int k = 0; k < TreeClass.COUNT; k++) {
+      breakingIndex[k] = p.trees().elephantBreakageKm2PerElephant[k] > 0 ? breaking++ : -1;
+    }
+    breakingClasses = breaking;
+    breakageScratch = lanes(blocks * Math.max(1, breaking));
     int pooled = herbivores * blocks * Herbivory.KINDS_PER_POOL;
     categoryForageKg = new double[][] {lanes(pooled), lanes(pooled)};
     inverseForage = lanes(herbivores);

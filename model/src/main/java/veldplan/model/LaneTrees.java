@@ -41,7 +41,7 @@ final class LaneTrees {
     for (int b = 0; b < blocks; b++) {
       breakageArguments(p, s, b);
     }
-    VectorMath.exp(s.breakageScratch, 0, blocks * TreeClass.COUNT);
+    VectorMath.exp(s.breakageScratch, 0, blocks * s.breakingClasses);
     for (int b = 0; b < blocks; b++) {
       blockTerms(p, f, year, s, b);
       java.util.Arrays.fill(s.nextClasses, 0);
@@ -134,7 +134,7 @@ final class LaneTrees {
         DoubleVector elephants = DoubleVector.fromArray(SPECIES, terms,
             ELEPHANTS_IN_REACH * LANES);
         broken = zero.blend(n.mul(reach).mul(one.sub(DoubleVector.fromArray(SPECIES,
-                s.breakageScratch, (b * TreeClass.COUNT + k) * LANES))),
+                s.breakageScratch, (b * s.breakingClasses + s.breakingIndex[k]) * LANES))),
             elephants.compare(VectorOperators.GT, 0));
         n = n.sub(broken);
       }
@@ -179,8 +179,8 @@ final class LaneTrees {
   }
 
   /**
-   * -a_k E for every class k of block b, E the elephants per km2 within reach (0 without
-   * reach), into s.breakageScratch for the exponential exp(-a_k E) of the breakage.
+   * -a_k E for every class k of block b that elephants break (a_k &gt; 0), E the elephants per
+   * km2 within reach (0 without reach), into s.breakageScratch for exp(-a_k E).
    */
   private static void breakageArguments(ModelParameters p, LaneState s, int b) {
     TreeParameters t = p.trees();
@@ -189,8 +189,11 @@ final class LaneTrees {
         ? DoubleVector.fromArray(SPECIES, s.elephantsPerKm2, b * LANES).div(reach)
         : DoubleVector.zero(SPECIES);
     for (int k = 0; k < TreeClass.COUNT; k++) {
-      elephants.mul(-t.elephantBreakageKm2PerElephant[k])
-          .intoArray(s.breakageScratch, (b * TreeClass.COUNT + k) * LANES);
+      int i = s.breakingIndex[k];
+      if (i >= 0) {
+        elephants.mul(-t.elephantBreakageKm2PerElephant[k])
+            .intoArray(s.breakageScratch, (b * s.breakingClasses + i) * LANES);
+      }
     }
   }
 
