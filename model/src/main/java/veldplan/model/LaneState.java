@@ -13,7 +13,8 @@ import jdk.incubator.vector.VectorSpecies;
  * computed by the scalar code ({@link Herbivory#updateReach}).
  *
  * <p>{@link #pack} and {@link #unpack} copy one lane from and to an {@link EcosystemState}, for
- * recording trajectories and for testing the lockstep processes against the scalar ones.
+ * the end-of-run check of each lane's state and for testing the lockstep processes against the
+ * scalar ones.
  */
 final class LaneState {
   /** The vector shape: the widest this machine computes natively (8 doubles with AVX-512). */
@@ -27,7 +28,7 @@ final class LaneState {
   final int lagSlots;
   /** Policy-only state (water points, reach, overlap weights), the same in every lane. */
   final EcosystemState shared;
-  /** One lane at a time, unpacked for recording (see {@link #unpack}). */
+  /** One lane at a time, unpacked for the end-of-run check of the state (see {@link #unpack}). */
   final EcosystemState view;
 
   // ---- carried from year to year, lane-innermost
