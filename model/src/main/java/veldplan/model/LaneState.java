@@ -28,7 +28,7 @@ final class LaneState {
   final int lagSlots;
   /** Policy-only state (water points, reach, overlap weights), the same in every lane. */
   final EcosystemState shared;
-  /** One lane at a time, unpacked for the end-of-run check of the state (see {@link #unpack}). */
+  /** One lane at a time, unpacked for the end-of-run check (see {@link #unpack}). */
   final EcosystemState view;
 
   // ---- carried from year to year, lane-innermost
