@@ -19,8 +19,8 @@ import jdk.incubator.vector.VectorOperators;
  * registers whether or not the JIT inlines these methods.
  *
  * <p>Methods: exp by Cody–Waite reduction x = k ln 2 + r, |r| &le; ln 2 / 2, and the Taylor
- * polynomial of e^r to degree 13 (truncation below 2e-16 relative), by Estrin's scheme; log by x = 2^e m, m in
- * [sqrt(2)/2, sqrt(2)), log m = 2 atanh(s) with s = (m - 1)/(m + 1), |s| &lt; 0.172, series to
+ * polynomial of e^r to degree 13 (truncation below 2e-16 relative), by Estrin's scheme; log by
+ * x = 2^e m, m in [sqrt(2)/2, sqrt(2)), log m = 2 atanh(s) with s = (m - 1)/(m + 1), |s| &lt; 0.172, series to
  * s^23 (Abramowitz &amp; Stegun 1964, 4.1.28 and 4.2.1, from memory; the reduction constants are
  * the split of ln 2 used by fdlibm).
  */
