@@ -32,9 +32,8 @@ final class LaneHerbivory {
     for (int b = 0; b < s.blocks; b++) {
       supply(p, s, b);
     }
-    java.util.Arrays.fill(s.forageKg, 0);
-    for (int b = 0; b < s.blocks; b++) {
-      forage(s, b);
+    for (int h = 0; h < s.herbivores; h++) {
+      forage(s, h);
     }
     for (int h = 0; h < s.herbivores; h++) {
       inverseForageAndDemand(p, s, h);
@@ -148,32 +147,36 @@ final class LaneHerbivory {
         .intoArray(supply, (at + HIGH_BROWSE) * LANES);
   }
 
-  /** What each herbivore can use in block b, by category, added to its forage. */
-  private static void forage(LaneState s, int b) {
+  /**
+   * What herbivore h can use in each block, by category, and its forage: the categories summed
+   * block by block (tall, short, low, high of block 0, then of block 1, ...), as the scalar code
+   * adds them.
+   */
+  private static void forage(LaneState s, int h) {
     double[] supply = s.categorySupplyKg;
-    int at = CATEGORIES_PER_BLOCK * b;
     double[] grassWeight = s.shared.usableWeight[0];
     double[] browseWeight = s.shared.usableWeight[1];
-    DoubleVector tallSupply = DoubleVector.fromArray(SPECIES, supply, (at + TALL) * LANES);
-    DoubleVector shortSupply = DoubleVector.fromArray(SPECIES, supply, (at + SHORT) * LANES);
-    DoubleVector lowSupply = DoubleVector.fromArray(SPECIES, supply, (at + LOW_BROWSE) * LANES);
-    DoubleVector highSupply = DoubleVector.fromArray(SPECIES, supply,
-        (at + HIGH_BROWSE) * LANES);
-    for (int h = 0; h < s.herbivores; h++) {
+    DoubleVector grassShare = DoubleVector.fromArray(SPECIES, s.grassDiet, h * LANES);
+    DoubleVector browseShare = grassShare.neg().add(1);
+    DoubleVector forage = DoubleVector.zero(SPECIES);
+    for (int b = 0; b < s.blocks; b++) {
+      int at = CATEGORIES_PER_BLOCK * b;
       int j = (h * s.blocks + b) * KINDS_PER_POOL;
-      DoubleVector grassShare = DoubleVector.fromArray(SPECIES, s.grassDiet, h * LANES);
-      DoubleVector browseShare = grassShare.neg().add(1);
-      DoubleVector tall = grassShare.mul(grassWeight[j]).mul(tallSupply);
-      DoubleVector short_ = grassShare.mul(grassWeight[j + 1]).mul(shortSupply);
-      DoubleVector low = browseShare.mul(browseWeight[j]).mul(lowSupply);
-      DoubleVector high = browseShare.mul(browseWeight[j + 1]).mul(highSupply);
+      DoubleVector tall = grassShare.mul(grassWeight[j])
+          .mul(DoubleVector.fromArray(SPECIES, supply, (at + TALL) * LANES));
+      DoubleVector short_ = grassShare.mul(grassWeight[j + 1])
+          .mul(DoubleVector.fromArray(SPECIES, supply, (at + SHORT) * LANES));
+      DoubleVector low = browseShare.mul(browseWeight[j])
+          .mul(DoubleVector.fromArray(SPECIES, supply, (at + LOW_BROWSE) * LANES));
+      DoubleVector high = browseShare.mul(browseWeight[j + 1])
+          .mul(DoubleVector.fromArray(SPECIES, supply, (at + HIGH_BROWSE) * LANES));
       tall.intoArray(s.categoryForageKg[0], j * LANES);
       short_.intoArray(s.categoryForageKg[0], (j + 1) * LANES);
       low.intoArray(s.categoryForageKg[1], j * LANES);
       high.intoArray(s.categoryForageKg[1], (j + 1) * LANES);
-      DoubleVector.fromArray(SPECIES, s.forageKg, h * LANES).add(tall).add(short_).add(low)
-          .add(high).intoArray(s.forageKg, h * LANES);
+      forage = forage.add(tall).add(short_).add(low).add(high);
     }
+    forage.intoArray(s.forageKg, h * LANES);
   }
 
   /** 1 / forage (1 without forage), demand, and demand per unit of usable supply of h. */
