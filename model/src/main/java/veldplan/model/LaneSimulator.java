@@ -61,7 +61,8 @@ public final class LaneSimulator {
     try {
       run(plan, forcing, workspace.state, out);
     } catch (LaneFailure e) {
-      throw Ensemble.failure(study, path, first + e.lane, plan, e.cause);
+      throw Ensemble.failure(study, path, first + e.lane, plan,
+          (RuntimeException) e.getCause());
     }
   }
 
@@ -116,16 +117,14 @@ public final class LaneSimulator {
     }
   }
 
-  /** A lane's run failed; {@link #cause} says where. */
+  /** A lane's run failed; its cause says where. */
   static final class LaneFailure extends IllegalStateException {
     private static final long serialVersionUID = 1L;
     final int lane;
-    final transient RuntimeException cause;
 
     LaneFailure(int lane, RuntimeException cause) {
       super("lane " + lane + ": " + cause.getMessage(), cause);
       this.lane = lane;
-      this.cause = cause;
     }
   }
 }
