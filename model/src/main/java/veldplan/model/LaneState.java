@@ -78,6 +78,8 @@ final class LaneState {
   final double[] blockScratch;
   /** One vector per herbivore and predator, for their growth exponentials. */
   final double[] animalScratch;
+  /** Elephants per km2 within reach of each block this year (0 without reach). */
+  final double[] elephantsInReach;
   /** One vector per block and tree class that elephants break, for the breakage exponentials. */
   final double[] breakageScratch;
   /** Per tree class, its index among the classes elephants break (rate &gt; 0), or -1. */
@@ -135,6 +137,7 @@ final class LaneState {
     tallShare = lanes(blocks);
     fireSpread = lanes(blocks);
     blockScratch = lanes(blocks);
+    elephantsInReach = lanes(blocks);
     animalScratch = lanes(herbivores + predators);
     int breaking = 0;
     for (int k = 0; k < TreeClass.COUNT; k++) {

@@ -28,10 +28,9 @@ final class LaneTrees {
   private static final int GROWTH = 2;
   private static final int PLANNED_FACTOR = 3;
   private static final int WILD_FACTOR = 4;
-  private static final int ELEPHANTS_IN_REACH = 5;
-  private static final int TOPKILL = 6;
+  private static final int TOPKILL = 5;
   /** Number of rows. */
-  static final int TERMS = 7;
+  static final int TERMS = 6;
 
   private LaneTrees() {}
 
@@ -95,13 +94,6 @@ final class LaneTrees {
     if (!s.plannedFireInBlock && !s.wildFireInBlock) {
       zero.intoArray(terms, TOPKILL * LANES);
     }
-    double reach = s.shared.reach[p.herbivores().elephant * s.blocks + b];
-    if (reach > 0) {
-      DoubleVector.fromArray(SPECIES, s.elephantsPerKm2, at).div(reach)
-          .intoArray(terms, ELEPHANTS_IN_REACH * LANES);
-    } else {
-      zero.intoArray(terms, ELEPHANTS_IN_REACH * LANES);
-    }
   }
 
   /** Death, topkill, breakage and growth of each class of block b, into the next classes. */
@@ -131,8 +123,8 @@ final class LaneTrees {
       DoubleVector broken = zero;
       if (t.elephantBreakageKm2PerElephant[k] > 0) {
         double reach = s.shared.reach[p.herbivores().elephant * s.blocks + b];
-        DoubleVector elephants = DoubleVector.fromArray(SPECIES, terms,
-            ELEPHANTS_IN_REACH * LANES);
+        DoubleVector elephants = DoubleVector.fromArray(SPECIES, s.elephantsInReach,
+            b * LANES);
         broken = zero.blend(n.mul(reach).mul(one.sub(DoubleVector.fromArray(SPECIES,
                 s.breakageScratch, (b * s.breakingClasses + s.breakingIndex[k]) * LANES))),
             elephants.compare(VectorOperators.GT, 0));
@@ -179,8 +171,9 @@ final class LaneTrees {
   }
 
   /**
-   * -a_k E for every class k of block b that elephants break (a_k &gt; 0), E the elephants per
-   * km2 within reach (0 without reach), into s.breakageScratch for exp(-a_k E).
+   * E, the elephants per km2 within reach of block b (0 without reach), into
+   * s.elephantsInReach, and -a_k E for every class k elephants break (a_k &gt; 0) into
+   * s.breakageScratch for exp(-a_k E).
    */
   private static void breakageArguments(ModelParameters p, LaneState s, int b) {
     TreeParameters t = p.trees();
@@ -188,6 +181,7 @@ final class LaneTrees {
     DoubleVector elephants = reach > 0
         ? DoubleVector.fromArray(SPECIES, s.elephantsPerKm2, b * LANES).div(reach)
         : DoubleVector.zero(SPECIES);
+    elephants.intoArray(s.elephantsInReach, b * LANES);
     for (int k = 0; k < TreeClass.COUNT; k++) {
       int i = s.breakingIndex[k];
       if (i >= 0) {
