@@ -67,7 +67,6 @@ final class LaneState {
   final double[] femalesTreated = new double[LANES];
 
   // ---- scratch, lane-innermost
-  final double[] nextClasses = new double[TreeClass.COUNT * LANES];
   final double[] treeTerms = new double[LaneTrees.TERMS * LANES];
   /** Whether some lane has a planned / an unplanned fire in the block being updated. */
   boolean plannedFireInBlock;

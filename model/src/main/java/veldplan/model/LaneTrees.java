@@ -28,9 +28,8 @@ final class LaneTrees {
   private static final int GROWTH = 2;
   private static final int PLANNED_FACTOR = 3;
   private static final int WILD_FACTOR = 4;
-  private static final int TOPKILL = 5;
   /** Number of rows. */
-  static final int TERMS = 6;
+  static final int TERMS = 5;
 
   private LaneTrees() {}
 
@@ -43,11 +42,7 @@ final class LaneTrees {
     VectorMath.exp(s.breakageScratch, 0, blocks * s.breakingClasses);
     for (int b = 0; b < blocks; b++) {
       blockTerms(p, f, year, s, b);
-      java.util.Arrays.fill(s.nextClasses, 0);
-      treeClasses(p, s, b);
-      recruitment(p, f, year, s, b);
-      System.arraycopy(s.nextClasses, 0, s.treesPerHa, b * TreeClass.COUNT * LANES,
-          TreeClass.COUNT * LANES);
+      treeClasses(p, f, year, s, b);
     }
   }
 
@@ -91,83 +86,96 @@ final class LaneTrees {
           .intoArray(terms, WILD_FACTOR * LANES);
       VectorMath.exp(terms, WILD_FACTOR * LANES);
     }
-    if (!s.plannedFireInBlock && !s.wildFireInBlock) {
-      zero.intoArray(terms, TOPKILL * LANES);
-    }
-  }
-
-  /** Death, topkill, breakage and growth of each class of block b, into the next classes. */
-  private static void treeClasses(ModelParameters p, LaneState s, int b) {
-    TreeParameters t = p.trees();
-    FireParameters fp = p.fire();
-    double[] terms = s.treeTerms;
-    double[] next = s.nextClasses;
-    int at = b * LANES;
-    DoubleVector zero = DoubleVector.zero(SPECIES);
-    DoubleVector one = DoubleVector.broadcast(SPECIES, 1.0);
-    for (int k = 0; k < TreeClass.COUNT; k++) {
-      double heightFactor = s.shared.topkillHeightFactor[k];
-      DoubleVector n = DoubleVector.fromArray(SPECIES, s.treesPerHa,
-              (b * TreeClass.COUNT + k) * LANES)
-          .mul(one.sub(DoubleVector.fromArray(SPECIES, terms, THINNING * LANES)
-              .add(t.mortalityPerYear[k]).min(1)));
-      // Topkill: 0 in a block no fire reached in any lane (TOPKILL row zeroed in blockTerms).
-      if (s.plannedFireInBlock || s.wildFireInBlock) {
-        topkill(s, b, heightFactor);
-      }
-      DoubleVector topkill = DoubleVector.fromArray(SPECIES, terms, TOPKILL * LANES);
-      DoubleVector topkilled = n.mul(topkill);
-      n = n.sub(topkilled);
-      // Breakage: n x reach x (1 - exp(-a E)) where there are elephants; classes elephants
-      // do not break (a = 0) lose nothing.
-      DoubleVector broken = zero;
-      if (t.elephantBreakageKm2PerElephant[k] > 0) {
-        double reach = s.shared.reach[p.herbivores().elephant * s.blocks + b];
-        DoubleVector elephants = DoubleVector.fromArray(SPECIES, s.elephantsInReach,
-            b * LANES);
-        broken = zero.blend(n.mul(reach).mul(one.sub(DoubleVector.fromArray(SPECIES,
-                s.breakageScratch, (b * s.breakingClasses + s.breakingIndex[k]) * LANES))),
-            elephants.compare(VectorOperators.GT, 0));
-        n = n.sub(broken);
-      }
-      int resproutClass = Math.min(k, TreeClass.FIRE_TRAP_0_5_TO_2M.ordinal());
-      DoubleVector.fromArray(SPECIES, next, resproutClass * LANES)
-          .add(topkilled.mul(1 - fp.topkillDeathFraction()).add(broken))
-          .intoArray(next, resproutClass * LANES);
-      if (k < TreeClass.COUNT - 1) {
-        // (loss x browse) x share, in the scalar code's order.
-        DoubleVector browsed = DoubleVector.fromArray(SPECIES, s.browsePressure, at)
-            .mul(t.browsingGrowthLoss).mul(t.lowBrowseShare[k]);
-        DoubleVector moving = n.mul(DoubleVector.fromArray(SPECIES, terms, GROWTH * LANES)
-            .mul(t.transitionPerYear[k]).mul(one.sub(browsed)).min(MAX_TRANSITION));
-        DoubleVector.fromArray(SPECIES, next, k * LANES).add(n.sub(moving))
-            .intoArray(next, k * LANES);
-        DoubleVector.fromArray(SPECIES, next, (k + 1) * LANES).add(moving)
-            .intoArray(next, (k + 1) * LANES);
-      } else {
-        DoubleVector.fromArray(SPECIES, next, k * LANES).add(n).intoArray(next, k * LANES);
-      }
-    }
   }
 
   /**
-   * Topkill.probabilityOfFactors, 1 / (1 + h f), weighted by the share burnt and summed over
-   * the planned and the unplanned fire, into the TOPKILL row; 0 in lanes without a fire.
+   * Death, topkill, breakage, growth and recruitment of every class of block b, written over
+   * the block's classes. Each class is read before anything is written over it, and the
+   * next-year numbers are summed in the scalar code's order: class k gets (what moves up from
+   * k - 1) + (what stays), and the fire-trap class then the resprouts of the classes above it.
+   *
+   * <p>Lanes without a fire of a kind, or without elephants, need no mask: their burnt share
+   * (0) or their 1 - exp(-a x 0) (0) times finite numbers is 0, as the scalar code's skipped
+   * term.
    */
-  private static void topkill(LaneState s, int b, double heightFactor) {
+  private static void treeClasses(ModelParameters p, LaneForcing f, int year, LaneState s,
+      int b) {
+    TreeParameters t = p.trees();
     double[] terms = s.treeTerms;
+    double[] trees = s.treesPerHa;
+    double[] heightFactor = s.shared.topkillHeightFactor;
+    double[] breakage = s.breakageScratch;
+    int[] breakingIndex = s.breakingIndex;
     int at = b * LANES;
-    DoubleVector zero = DoubleVector.zero(SPECIES);
+    int base = b * TreeClass.COUNT * LANES;
+    int breakageBase = b * s.breakingClasses;
+    double survivingTopkill = 1 - p.fire().topkillDeathFraction();
+    double reach = s.shared.reach[p.herbivores().elephant * s.blocks + b];
+    boolean fire = s.plannedFireInBlock || s.wildFireInBlock;
     DoubleVector one = DoubleVector.broadcast(SPECIES, 1.0);
+    DoubleVector thinning = DoubleVector.fromArray(SPECIES, terms, THINNING * LANES);
+    DoubleVector growth = DoubleVector.fromArray(SPECIES, terms, GROWTH * LANES);
+    DoubleVector browseLoss = DoubleVector.fromArray(SPECIES, s.browsePressure, at)
+        .mul(t.browsingGrowthLoss);
     DoubleVector planned = DoubleVector.fromArray(SPECIES, s.plannedBurntFraction, at);
     DoubleVector wild = DoubleVector.fromArray(SPECIES, s.wildBurntFraction, at);
-    DoubleVector plannedKill = planned.mul(one.div(DoubleVector.fromArray(SPECIES, terms,
-        PLANNED_FACTOR * LANES).mul(heightFactor).add(1)));
-    DoubleVector wildKill = wild.mul(one.div(DoubleVector.fromArray(SPECIES, terms,
-        WILD_FACTOR * LANES).mul(heightFactor).add(1)));
-    zero.add(zero.blend(plannedKill, planned.compare(VectorOperators.GT, 0)))
-        .add(zero.blend(wildKill, wild.compare(VectorOperators.GT, 0)))
-        .intoArray(terms, TOPKILL * LANES);
+    DoubleVector plannedFactor = DoubleVector.fromArray(SPECIES, terms, PLANNED_FACTOR * LANES);
+    DoubleVector wildFactor = DoubleVector.fromArray(SPECIES, terms, WILD_FACTOR * LANES);
+    // Recruitment reads the large classes before they are written over.
+    DoubleVector large = DoubleVector.zero(SPECIES);
+    for (int k = TreeClass.FIRST_LARGE; k < TreeClass.COUNT; k++) {
+      large = large.add(DoubleVector.fromArray(SPECIES, trees, base + k * LANES));
+    }
+    DoubleVector recruits = large.mul(t.recruitsPerLargeTreePerYear)
+        .add(t.seedRainPerHaPerYear)
+        .mul(DoubleVector.fromArray(SPECIES, terms, COMPETITION * LANES))
+        .mul(DoubleVector.fromArray(SPECIES, f.treeGrowthIndex, (year * s.blocks + b) * LANES)
+            .min(1));
+    DoubleVector next0 = DoubleVector.zero(SPECIES);
+    DoubleVector next1 = DoubleVector.zero(SPECIES);
+    DoubleVector movedUp = DoubleVector.zero(SPECIES);
+    for (int k = 0; k < TreeClass.COUNT; k++) {
+      DoubleVector n = DoubleVector.fromArray(SPECIES, trees, base + k * LANES)
+          .mul(one.sub(thinning.add(t.mortalityPerYear[k]).min(1)));
+      // Topkill (Topkill.probabilityOfFactors, 1 / (1 + h f)) weighted by the share burnt,
+      // planned then unplanned; none in a block no fire reached in any lane.
+      DoubleVector resprouts = DoubleVector.zero(SPECIES);
+      if (fire) {
+        DoubleVector topkill = planned.mul(one.div(plannedFactor.mul(heightFactor[k]).add(1)))
+            .add(wild.mul(one.div(wildFactor.mul(heightFactor[k]).add(1))));
+        DoubleVector topkilled = n.mul(topkill);
+        n = n.sub(topkilled);
+        resprouts = topkilled.mul(survivingTopkill);
+      }
+      // Breakage: n x reach x (1 - exp(-a E)); classes elephants do not break lose nothing.
+      int breaking = breakingIndex[k];
+      if (breaking >= 0) {
+        DoubleVector broken = n.mul(reach).mul(one.sub(DoubleVector.fromArray(SPECIES,
+            breakage, (breakageBase + breaking) * LANES)));
+        n = n.sub(broken);
+        resprouts = resprouts.add(broken);
+      }
+      DoubleVector stays = n;
+      DoubleVector moving = DoubleVector.zero(SPECIES);
+      if (k < TreeClass.COUNT - 1) {
+        // (loss x browse) x share, in the scalar code's order.
+        DoubleVector browsed = browseLoss.mul(t.lowBrowseShare[k]);
+        moving = n.mul(growth.mul(t.transitionPerYear[k]).mul(one.sub(browsed))
+            .min(MAX_TRANSITION));
+        stays = n.sub(moving);
+      }
+      if (k == 0) {
+        next0 = next0.add(resprouts).add(stays);
+      } else if (k == 1) {
+        next1 = movedUp.add(resprouts).add(stays);
+      } else {
+        next1 = next1.add(resprouts);
+        movedUp.add(stays).intoArray(trees, base + k * LANES);
+      }
+      movedUp = moving;
+    }
+    next0.add(recruits).intoArray(trees, base);
+    next1.intoArray(trees, base + LANES);
   }
 
   /**
@@ -189,22 +197,5 @@ final class LaneTrees {
             .intoArray(s.breakageScratch, (b * s.breakingClasses + i) * LANES);
       }
     }
-  }
-
-  /** Seedlings from large trees and seed rain, damped by competition. */
-  private static void recruitment(ModelParameters p, LaneForcing f, int year, LaneState s,
-      int b) {
-    TreeParameters t = p.trees();
-    int base = b * TreeClass.COUNT * LANES;
-    DoubleVector large = DoubleVector.zero(SPECIES);
-    for (int k = TreeClass.FIRST_LARGE; k < TreeClass.COUNT; k++) {
-      large = large.add(DoubleVector.fromArray(SPECIES, s.treesPerHa, base + k * LANES));
-    }
-    DoubleVector.fromArray(SPECIES, s.nextClasses, 0)
-        .add(large.mul(t.recruitsPerLargeTreePerYear).add(t.seedRainPerHaPerYear)
-            .mul(DoubleVector.fromArray(SPECIES, s.treeTerms, COMPETITION * LANES))
-            .mul(DoubleVector.fromArray(SPECIES, f.treeGrowthIndex,
-                (year * s.blocks + b) * LANES).min(1)))
-        .intoArray(s.nextClasses, 0);
   }
 }
