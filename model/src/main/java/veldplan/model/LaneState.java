@@ -68,9 +68,8 @@ final class LaneState {
 
   // ---- scratch, lane-innermost
   final double[] treeTerms = new double[LaneTrees.TERMS * LANES];
-  /** Whether some lane has a planned / an unplanned fire in the block being updated. */
-  boolean plannedFireInBlock;
-  boolean wildFireInBlock;
+  /** Next-year numbers carried between tree classes (see LaneTrees.treeClasses). */
+  final double[] treeCarry = new double[3 * LANES];
   /** One vector's worth of scratch for {@link VectorMath}. */
   final double[] math = new double[LANES];
   /** One vector per block, for exponentials taken for every block at once. */
@@ -79,8 +78,12 @@ final class LaneState {
   final double[] animalScratch;
   /** Elephants per km2 within reach of each block this year (0 without reach). */
   final double[] elephantsInReach;
-  /** One vector per block and tree class that elephants break, for the breakage exponentials. */
-  final double[] breakageScratch;
+  /**
+   * The trees' exponentials of a year, taken at once: one vector per block and tree class that
+   * elephants break (breakage), then two per block (topkill intensity factors of the planned
+   * and the unplanned fire; see LaneTrees).
+   */
+  final double[] treeExponentials;
   /** Per tree class, its index among the classes elephants break (rate &gt; 0), or -1. */
   final int[] breakingIndex = new int[TreeClass.COUNT];
   /** Number of tree classes elephants break. */
@@ -143,7 +146,7 @@ final class LaneState {
       breakingIndex[k] = p.trees().elephantBreakageKm2PerElephant[k] > 0 ? breaking++ : -1;
     }
     breakingClasses = breaking;
-    breakageScratch = lanes(blocks * Math.max(1, breaking));
+    treeExponentials = lanes(blocks * (breaking + 2));
     int pooled = herbivores * blocks * Herbivory.KINDS_PER_POOL;
     categoryForageKg = new double[][] {lanes(pooled), lanes(pooled)};
     inverseForage = lanes(herbivores);

@@ -9,12 +9,13 @@ import jdk.incubator.vector.VectorOperators;
 /**
  * {@link Trees#update} for every lane of a {@link LaneState} at once; see there for the model.
  * Where the scalar code skips a term (no fire, no elephants), the term is computed for every
- * lane and set to 0 in the lanes the scalar code would skip, so each lane gets the same
- * numbers.
+ * lane; in the lanes the scalar code skips, it is a finite number times 0 (the burnt share, or
+ * 1 - exp(-a x 0)), so each lane gets the same numbers. A year takes all its exponentials in
+ * one call, then updates each block in one pass that keeps the block's terms in registers.
  *
- * <p>The work is split into small methods that pass arrays, not vectors: the JIT compiles each
- * with every vector in registers, where one large method would exceed its inlining budget and
- * leave vectors as heap objects.
+ * <p>The methods pass arrays, not vectors: the JIT compiles each with every vector in
+ * registers, where vectors passed between methods that it does not inline would be heap
+ * objects.
  */
 final class LaneTrees {
   /** Cap on the share of a class that can move up in a year (as in {@link Trees}). */
@@ -26,31 +27,34 @@ final class LaneTrees {
   private static final int COMPETITION = 0;
   private static final int THINNING = 1;
   private static final int GROWTH = 2;
-  private static final int PLANNED_FACTOR = 3;
-  private static final int WILD_FACTOR = 4;
   /** Number of rows. */
-  static final int TERMS = 5;
+  static final int TERMS = 3;
+  // Vectors of LaneState.treeCarry.
+  private static final int NEXT_0 = 0;
+  private static final int NEXT_1 = LANES;
+  private static final int MOVED_UP = 2 * LANES;
 
   private LaneTrees() {}
 
   static void update(ModelParameters p, LaneForcing f, int year, LaneState s) {
     int blocks = s.blocks;
-    // Elephant breakage: -a_k E of every block and class, then every exponential at once.
+    // Elephant breakage, -a_k E, and topkill intensity factors, -b sqrt(I), of every block:
+    // then every exponential at once.
     for (int b = 0; b < blocks; b++) {
       breakageArguments(p, s, b);
+      fireArguments(p, s, b);
     }
-    VectorMath.exp(s.breakageScratch, 0, blocks * s.breakingClasses);
+    VectorMath.exp(s.treeExponentials, 0, blocks * (s.breakingClasses + 2));
     for (int b = 0; b < blocks; b++) {
       blockTerms(p, f, year, s, b);
       treeClasses(p, f, year, s, b);
     }
   }
 
-  /** Competition, thinning, growth, topkill intensity factors and elephants of block b. */
+  /** Competition, thinning and growth of block b. */
   private static void blockTerms(ModelParameters p, LaneForcing f, int year, LaneState s,
       int b) {
     TreeParameters t = p.trees();
-    FireParameters fp = p.fire();
     double[] terms = s.treeTerms;
     int at = b * LANES;
     int forcingAt = (year * s.blocks + b) * LANES;
@@ -67,25 +71,22 @@ final class LaneTrees {
         .intoArray(terms, THINNING * LANES);
     DoubleVector.fromArray(SPECIES, f.treeGrowthIndex, forcingAt).mul(competition)
         .intoArray(terms, GROWTH * LANES);
-    // Topkill.intensityFactor: exp(-b sqrt(I)), where some lane has a fire of that kind (the
-    // factors of lanes without one are never used).
-    double coefficient = -fp.topkillSqrtIntensity();
-    s.plannedFireInBlock = DoubleVector.fromArray(SPECIES, s.plannedBurntFraction, at)
-        .compare(VectorOperators.GT, 0).anyTrue();
-    s.wildFireInBlock = DoubleVector.fromArray(SPECIES, s.wildBurntFraction, at)
-        .compare(VectorOperators.GT, 0).anyTrue();
-    if (s.plannedFireInBlock) {
-      DoubleVector.fromArray(SPECIES, s.plannedIntensityKwPerM, at)
-          .lanewise(VectorOperators.SQRT).mul(coefficient)
-          .intoArray(terms, PLANNED_FACTOR * LANES);
-      VectorMath.exp(terms, PLANNED_FACTOR * LANES);
-    }
-    if (s.wildFireInBlock) {
-      DoubleVector.fromArray(SPECIES, s.wildIntensityKwPerM, at)
-          .lanewise(VectorOperators.SQRT).mul(coefficient)
-          .intoArray(terms, WILD_FACTOR * LANES);
-      VectorMath.exp(terms, WILD_FACTOR * LANES);
-    }
+  }
+
+  /**
+   * -b sqrt(I) of block b's planned and unplanned fire, for Topkill.intensityFactor
+   * exp(-b sqrt(I)), after the breakage arguments of every block (lanes without a fire of a
+   * kind get exp(0), unused).
+   */
+  private static void fireArguments(ModelParameters p, LaneState s, int b) {
+    double coefficient = -p.fire().topkillSqrtIntensity();
+    int at = b * LANES;
+    int to = (s.blocks * s.breakingClasses + 2 * b) * LANES;
+    DoubleVector.fromArray(SPECIES, s.plannedIntensityKwPerM, at)
+        .lanewise(VectorOperators.SQRT).mul(coefficient).intoArray(s.treeExponentials, to);
+    DoubleVector.fromArray(SPECIES, s.wildIntensityKwPerM, at)
+        .lanewise(VectorOperators.SQRT).mul(coefficient)
+        .intoArray(s.treeExponentials, to + LANES);
   }
 
   /**
@@ -101,26 +102,29 @@ final class LaneTrees {
   private static void treeClasses(ModelParameters p, LaneForcing f, int year, LaneState s,
       int b) {
     TreeParameters t = p.trees();
-    double[] terms = s.treeTerms;
     double[] trees = s.treesPerHa;
     double[] heightFactor = s.shared.topkillHeightFactor;
-    double[] breakage = s.breakageScratch;
+    double[] exponentials = s.treeExponentials;
     int[] breakingIndex = s.breakingIndex;
     int at = b * LANES;
     int base = b * TreeClass.COUNT * LANES;
     int breakageBase = b * s.breakingClasses;
     double survivingTopkill = 1 - p.fire().topkillDeathFraction();
     double reach = s.shared.reach[p.herbivores().elephant * s.blocks + b];
-    boolean fire = s.plannedFireInBlock || s.wildFireInBlock;
+    DoubleVector zero = DoubleVector.zero(SPECIES);
     DoubleVector one = DoubleVector.broadcast(SPECIES, 1.0);
+    double[] terms = s.treeTerms;
     DoubleVector thinning = DoubleVector.fromArray(SPECIES, terms, THINNING * LANES);
     DoubleVector growth = DoubleVector.fromArray(SPECIES, terms, GROWTH * LANES);
     DoubleVector browseLoss = DoubleVector.fromArray(SPECIES, s.browsePressure, at)
         .mul(t.browsingGrowthLoss);
     DoubleVector planned = DoubleVector.fromArray(SPECIES, s.plannedBurntFraction, at);
     DoubleVector wild = DoubleVector.fromArray(SPECIES, s.wildBurntFraction, at);
-    DoubleVector plannedFactor = DoubleVector.fromArray(SPECIES, terms, PLANNED_FACTOR * LANES);
-    DoubleVector wildFactor = DoubleVector.fromArray(SPECIES, terms, WILD_FACTOR * LANES);
+    boolean plannedFire = planned.compare(VectorOperators.GT, 0).anyTrue();
+    boolean wildFire = wild.compare(VectorOperators.GT, 0).anyTrue();
+    int factors = (s.blocks * s.breakingClasses + 2 * b) * LANES;
+    DoubleVector plannedFactor = DoubleVector.fromArray(SPECIES, exponentials, factors);
+    DoubleVector wildFactor = DoubleVector.fromArray(SPECIES, exponentials, factors + LANES);
     // Recruitment reads the large classes before they are written over.
     DoubleVector large = DoubleVector.zero(SPECIES);
     for (int k = TreeClass.FIRST_LARGE; k < TreeClass.COUNT; k++) {
@@ -131,18 +135,27 @@ final class LaneTrees {
         .mul(DoubleVector.fromArray(SPECIES, terms, COMPETITION * LANES))
         .mul(DoubleVector.fromArray(SPECIES, f.treeGrowthIndex, (year * s.blocks + b) * LANES)
             .min(1));
-    DoubleVector next0 = DoubleVector.zero(SPECIES);
-    DoubleVector next1 = DoubleVector.zero(SPECIES);
-    DoubleVector movedUp = DoubleVector.zero(SPECIES);
+    // Sums carried from class to class (in an array: vectors carried round a loop would be
+    // heap objects): class 0 and the fire-trap class, added to until the last class, and what
+    // moves up from the class before.
+    double[] carry = s.treeCarry;
+    zero.intoArray(carry, NEXT_0);
+    zero.intoArray(carry, NEXT_1);
+    zero.intoArray(carry, MOVED_UP);
     for (int k = 0; k < TreeClass.COUNT; k++) {
       DoubleVector n = DoubleVector.fromArray(SPECIES, trees, base + k * LANES)
           .mul(one.sub(thinning.add(t.mortalityPerYear[k]).min(1)));
-      // Topkill (Topkill.probabilityOfFactors, 1 / (1 + h f)) weighted by the share burnt,
-      // planned then unplanned; none in a block no fire reached in any lane.
-      DoubleVector resprouts = DoubleVector.zero(SPECIES);
-      if (fire) {
-        DoubleVector topkill = planned.mul(one.div(plannedFactor.mul(heightFactor[k]).add(1)))
-            .add(wild.mul(one.div(wildFactor.mul(heightFactor[k]).add(1))));
+      // Topkill: planned share x 1 / (1 + h f) + unplanned share x 1 / (1 + h f), each term
+      // only where some lane of the block has that fire (elsewhere 0 x a finite number, as
+      // the scalar code's skipped term).
+      DoubleVector resprouts = zero;
+      if (plannedFire || wildFire) {
+        DoubleVector topkill = plannedFire
+            ? planned.mul(one.div(plannedFactor.mul(heightFactor[k]).add(1)))
+            : wild.mul(one.div(wildFactor.mul(heightFactor[k]).add(1)));
+        if (plannedFire && wildFire) {
+          topkill = topkill.add(wild.mul(one.div(wildFactor.mul(heightFactor[k]).add(1))));
+        }
         DoubleVector topkilled = n.mul(topkill);
         n = n.sub(topkilled);
         resprouts = topkilled.mul(survivingTopkill);
@@ -151,12 +164,12 @@ final class LaneTrees {
       int breaking = breakingIndex[k];
       if (breaking >= 0) {
         DoubleVector broken = n.mul(reach).mul(one.sub(DoubleVector.fromArray(SPECIES,
-            breakage, (breakageBase + breaking) * LANES)));
+            exponentials, (breakageBase + breaking) * LANES)));
         n = n.sub(broken);
         resprouts = resprouts.add(broken);
       }
       DoubleVector stays = n;
-      DoubleVector moving = DoubleVector.zero(SPECIES);
+      DoubleVector moving = zero;
       if (k < TreeClass.COUNT - 1) {
         // (loss x browse) x share, in the scalar code's order.
         DoubleVector browsed = browseLoss.mul(t.lowBrowseShare[k]);
@@ -164,24 +177,28 @@ final class LaneTrees {
             .min(MAX_TRANSITION));
         stays = n.sub(moving);
       }
+      // Class k: (what moves up from k - 1) + (what stays); the resprouts go to class 0 from
+      // class 0, to the fire-trap class from every class above.
       if (k == 0) {
-        next0 = next0.add(resprouts).add(stays);
+        resprouts.add(stays).intoArray(carry, NEXT_0);
       } else if (k == 1) {
-        next1 = movedUp.add(resprouts).add(stays);
+        DoubleVector.fromArray(SPECIES, carry, MOVED_UP).add(resprouts).add(stays)
+            .intoArray(carry, NEXT_1);
       } else {
-        next1 = next1.add(resprouts);
-        movedUp.add(stays).intoArray(trees, base + k * LANES);
+        DoubleVector.fromArray(SPECIES, carry, NEXT_1).add(resprouts).intoArray(carry, NEXT_1);
+        DoubleVector.fromArray(SPECIES, carry, MOVED_UP).add(stays)
+            .intoArray(trees, base + k * LANES);
       }
-      movedUp = moving;
+      moving.intoArray(carry, MOVED_UP);
     }
-    next0.add(recruits).intoArray(trees, base);
-    next1.intoArray(trees, base + LANES);
+    DoubleVector.fromArray(SPECIES, carry, NEXT_0).add(recruits).intoArray(trees, base);
+    DoubleVector.fromArray(SPECIES, carry, NEXT_1).intoArray(trees, base + LANES);
   }
 
   /**
    * E, the elephants per km2 within reach of block b (0 without reach), into
    * s.elephantsInReach, and -a_k E for every class k elephants break (a_k &gt; 0) into
-   * s.breakageScratch for exp(-a_k E).
+   * s.treeExponentials for exp(-a_k E).
    */
   private static void breakageArguments(ModelParameters p, LaneState s, int b) {
     TreeParameters t = p.trees();
@@ -194,7 +211,7 @@ final class LaneTrees {
       int i = s.breakingIndex[k];
       if (i >= 0) {
         elephants.mul(-t.elephantBreakageKm2PerElephant[k])
-            .intoArray(s.breakageScratch, (b * s.breakingClasses + i) * LANES);
+            .intoArray(s.treeExponentials, (b * s.breakingClasses + i) * LANES);
       }
     }
   }
