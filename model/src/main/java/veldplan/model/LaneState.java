@@ -67,7 +67,6 @@ final class LaneState {
   final double[] femalesTreated = new double[LANES];
 
   // ---- scratch, lane-innermost
-  final double[] treeTerms = new double[LaneTrees.TERMS * LANES];
   /** Next-year numbers carried between tree classes (see LaneTrees.treeClasses). */
   final double[] treeCarry = new double[3 * LANES];
   /** One vector's worth of scratch for {@link VectorMath}. */

@@ -23,12 +23,6 @@ final class LaneTrees {
   /** Extra mortality per unit of basal area above the maximum (as in {@link Trees}). */
   private static final double SELF_THINNING = 0.1;
 
-  // Rows of LaneState.treeTerms, one vector each.
-  private static final int COMPETITION = 0;
-  private static final int THINNING = 1;
-  private static final int GROWTH = 2;
-  /** Number of rows. */
-  static final int TERMS = 3;
   // Vectors of LaneState.treeCarry.
   private static final int NEXT_0 = 0;
   private static final int NEXT_1 = LANES;
@@ -46,31 +40,8 @@ final class LaneTrees {
     }
     VectorMath.exp(s.treeExponentials, 0, blocks * (s.breakingClasses + 2));
     for (int b = 0; b < blocks; b++) {
-      blockTerms(p, f, year, s, b);
       treeClasses(p, f, year, s, b);
     }
-  }
-
-  /** Competition, thinning and growth of block b. */
-  private static void blockTerms(ModelParameters p, LaneForcing f, int year, LaneState s,
-      int b) {
-    TreeParameters t = p.trees();
-    double[] terms = s.treeTerms;
-    int at = b * LANES;
-    int forcingAt = (year * s.blocks + b) * LANES;
-    DoubleVector zero = DoubleVector.zero(SPECIES);
-    DoubleVector one = DoubleVector.broadcast(SPECIES, 1.0);
-    DoubleVector maxBasalArea = DoubleVector.fromArray(SPECIES, f.aetMm, forcingAt)
-        .mul(t.maxBasalAreaM2PerHaPerMmAet);
-    DoubleVector ratio = DoubleVector.broadcast(SPECIES, 2.0).blend(
-        DoubleVector.fromArray(SPECIES, s.basalAreaM2PerHa, at).div(maxBasalArea),
-        maxBasalArea.compare(VectorOperators.GT, 0));
-    DoubleVector competition = one.sub(ratio).max(0);
-    competition.intoArray(terms, COMPETITION * LANES);
-    zero.blend(ratio.sub(1).mul(SELF_THINNING).min(0.5), ratio.compare(VectorOperators.GT, 1))
-        .intoArray(terms, THINNING * LANES);
-    DoubleVector.fromArray(SPECIES, f.treeGrowthIndex, forcingAt).mul(competition)
-        .intoArray(terms, GROWTH * LANES);
   }
 
   /**
@@ -113,9 +84,18 @@ final class LaneTrees {
     double reach = s.shared.reach[p.herbivores().elephant * s.blocks + b];
     DoubleVector zero = DoubleVector.zero(SPECIES);
     DoubleVector one = DoubleVector.broadcast(SPECIES, 1.0);
-    double[] terms = s.treeTerms;
-    DoubleVector thinning = DoubleVector.fromArray(SPECIES, terms, THINNING * LANES);
-    DoubleVector growth = DoubleVector.fromArray(SPECIES, terms, GROWTH * LANES);
+    // Competition, self-thinning and growth from basal area against its water-set maximum.
+    int forcingAt = (year * s.blocks + b) * LANES;
+    DoubleVector maxBasalArea = DoubleVector.fromArray(SPECIES, f.aetMm, forcingAt)
+        .mul(t.maxBasalAreaM2PerHaPerMmAet);
+    DoubleVector ratio = DoubleVector.broadcast(SPECIES, 2.0).blend(
+        DoubleVector.fromArray(SPECIES, s.basalAreaM2PerHa, at).div(maxBasalArea),
+        maxBasalArea.compare(VectorOperators.GT, 0));
+    DoubleVector competition = one.sub(ratio).max(0);
+    DoubleVector thinning = zero.blend(ratio.sub(1).mul(SELF_THINNING).min(0.5),
+        ratio.compare(VectorOperators.GT, 1));
+    DoubleVector treeGrowthIndex = DoubleVector.fromArray(SPECIES, f.treeGrowthIndex, forcingAt);
+    DoubleVector growth = treeGrowthIndex.mul(competition);
     DoubleVector browseLoss = DoubleVector.fromArray(SPECIES, s.browsePressure, at)
         .mul(t.browsingGrowthLoss);
     DoubleVector planned = DoubleVector.fromArray(SPECIES, s.plannedBurntFraction, at);
@@ -132,9 +112,7 @@ final class LaneTrees {
     }
     DoubleVector recruits = large.mul(t.recruitsPerLargeTreePerYear)
         .add(t.seedRainPerHaPerYear)
-        .mul(DoubleVector.fromArray(SPECIES, terms, COMPETITION * LANES))
-        .mul(DoubleVector.fromArray(SPECIES, f.treeGrowthIndex, (year * s.blocks + b) * LANES)
-            .min(1));
+        .mul(competition).mul(treeGrowthIndex.min(1));
     // Sums carried from class to class (in an array: vectors carried round a loop would be
     // heap objects): class 0 and the fire-trap class, added to until the last class, and what
     // moves up from the class before.
