@@ -115,11 +115,8 @@ final class LaneTrees {
         .mul(competition).mul(treeGrowthIndex.min(1));
     // Sums carried from class to class (in an array: vectors carried round a loop would be
     // heap objects): class 0 and the fire-trap class, added to until the last class, and what
-    // moves up from the class before.
+    // moves up from the class before; classes 0 and 1 write each before it is read.
     double[] carry = s.treeCarry;
-    zero.intoArray(carry, NEXT_0);
-    zero.intoArray(carry, NEXT_1);
-    zero.intoArray(carry, MOVED_UP);
     for (int k = 0; k < TreeClass.COUNT; k++) {
       DoubleVector n = DoubleVector.fromArray(SPECIES, trees, base + k * LANES)
           .mul(one.sub(thinning.add(t.mortalityPerYear[k]).min(1)));
